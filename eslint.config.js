@@ -1,0 +1,63 @@
+import prettier from 'eslint-config-prettier';
+import js from '@eslint/js';
+import svelte from 'eslint-plugin-svelte';
+import globals from 'globals';
+import ts from 'typescript-eslint';
+import svelteConfig from './svelte.config.js';
+
+/** Modules the pure engine and unit code must never import. */
+const frameworkImports = [
+	{ group: ['svelte', 'svelte/*', '$app/*', '$env/*', '$lib', '$lib/*'], message: 'The engine is pure: relative imports only, no framework.' },
+	{ group: ['dexie', 'drizzle-orm', 'drizzle-orm/*', 'mysql2', 'mysql2/*', 'node:*', 'fs', 'path'], message: 'The engine is pure: no database or Node imports.' }
+];
+
+export default ts.config(
+	{
+		ignores: ['build/', '.svelte-kit/', 'dist/', 'dev-dist/', 'node_modules/', '.data/', 'drizzle/', 'test-results/', 'playwright-report/', 'tests/reference/.cache/']
+	},
+	js.configs.recommended,
+	...ts.configs.recommended,
+	...svelte.configs.recommended,
+	prettier,
+	...svelte.configs.prettier,
+	{
+		languageOptions: { globals: { ...globals.browser, ...globals.node } },
+		rules: {
+			'no-undef': 'off',
+			'@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }]
+		}
+	},
+	{
+		files: ['**/*.ts', '**/*.svelte.ts'],
+		ignores: ['*.config.ts', 'drizzle.config.ts'],
+		languageOptions: {
+			parserOptions: { projectService: true, tsconfigRootDir: import.meta.dirname }
+		},
+		rules: { '@typescript-eslint/no-floating-promises': 'error' }
+	},
+	{
+		files: ['**/*.svelte', '**/*.svelte.ts', '**/*.svelte.js'],
+		languageOptions: {
+			parserOptions: {
+				projectService: true,
+				extraFileExtensions: ['.svelte'],
+				parser: ts.parser,
+				svelteConfig
+			}
+		}
+	},
+	{
+		files: ['src/lib/steam/**', 'src/lib/units/**'],
+		rules: { 'no-restricted-imports': ['error', { patterns: frameworkImports }] }
+	},
+	{
+		// Server-only code stays out of the browser: only server files and routes may import it.
+		files: ['src/lib/components/**', 'src/lib/offline/**', 'src/lib/schemas/**'],
+		rules: {
+			'no-restricted-imports': [
+				'error',
+				{ patterns: [{ group: ['$lib/server', '$lib/server/*'], message: 'Server-only code.' }] }
+			]
+		}
+	}
+);
