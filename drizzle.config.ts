@@ -1,5 +1,5 @@
 import { defineConfig } from 'drizzle-kit';
-import { databaseUrl } from './scripts/env';
+import { databaseUrl } from './scripts/env.ts';
 
 export default defineConfig({
 	schema: './src/lib/server/db/schema.ts',

@@ -2,8 +2,8 @@ import { sveltekit } from '@sveltejs/kit/vite';
 import tailwindcss from '@tailwindcss/vite';
 import { SvelteKitPWA } from '@vite-pwa/sveltekit';
 import { defineConfig } from 'vitest/config';
-import { pwaOptions } from './pwa/options';
-import { pwaIcons } from './pwa/icons-plugin';
+import { pwaOptions } from './pwa/options.ts';
+import { pwaIcons } from './pwa/icons-plugin.ts';
 
 export default defineConfig({
 	plugins: [tailwindcss(), sveltekit(), SvelteKitPWA(pwaOptions), pwaIcons()],

@@ -1,5 +1,5 @@
 import type { SvelteKitPWAOptions } from '@vite-pwa/sveltekit';
-import { manifest } from './manifest';
+import { manifest } from './manifest.ts';
 
 /**
  * Service-worker strategy.
