@@ -1,0 +1,136 @@
+import { date, index, int, json, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
+import { at, changeSeq, createdAt, id, money, updatedAt, uuid, version, word } from './columns';
+import { assets, headers, sites } from './sites';
+import { firms, users } from './tenancy';
+
+/** One visit to a site by one or more auditors. */
+export const surveys = mysqlTable(
+	'surveys',
+	{
+		id: id(),
+		firmId: uuid('firm_id')
+			.notNull()
+			.references(() => firms.id),
+		siteId: uuid('site_id')
+			.notNull()
+			.references(() => sites.id),
+		name: varchar('name', { length: 160 }).notNull(),
+		startsOn: date('starts_on', { mode: 'string' }),
+		endsOn: date('ends_on', { mode: 'string' }),
+		/** planned | in-field | in-review | published | closed */
+		status: word('status').notNull().default('planned'),
+		publishedAt: at('published_at'),
+		createdBy: uuid('created_by').references(() => users.id),
+		version: version(),
+		changeSeq: changeSeq(),
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
+	},
+	(t) => [index('surveys_firm_idx').on(t.firmId), index('surveys_site_idx').on(t.siteId)]
+);
+
+/** Which auditors may record on which survey. */
+export const surveyAuditors = mysqlTable(
+	'survey_auditors',
+	{
+		surveyId: uuid('survey_id')
+			.notNull()
+			.references(() => surveys.id, { onDelete: 'cascade' }),
+		userId: uuid('user_id')
+			.notNull()
+			.references(() => users.id),
+		assignedAt: createdAt()
+	},
+	(t) => [primaryKey({ columns: [t.surveyId, t.userId] }), index('survey_auditors_user_idx').on(t.userId)]
+);
+
+/** A group of findings repaired as one job ("replace 14 traps in the dryer hall"). */
+export const measures = mysqlTable(
+	'measures',
+	{
+		id: id(),
+		surveyId: uuid('survey_id')
+			.notNull()
+			.references(() => surveys.id),
+		name: varchar('name', { length: 160 }).notNull(),
+		description: text('description'),
+		/** Overrides the sum of its findings' repair costs when set (minor units). */
+		repairCost: money('repair_cost_minor'),
+		sortOrder: int('sort_order').notNull().default(0),
+		deletedAt: at('deleted_at'),
+		version: version(),
+		changeSeq: changeSeq(),
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
+	},
+	(t) => [index('measures_survey_idx').on(t.surveyId)]
+);
+
+/**
+ * One observation on a survey. The id is made on the device (UUID) so an offline record
+ * keeps its identity through sync. `inputs` holds the kind-specific field data validated by
+ * $lib/schemas/finding; `results` holds what the server computed from them with the shared
+ * engine (the server never stores a loss the device computed).
+ */
+export const findings = mysqlTable(
+	'findings',
+	{
+		id: id(),
+		surveyId: uuid('survey_id')
+			.notNull()
+			.references(() => surveys.id),
+		/** trap | leak | insulation | header */
+		kind: word('kind').notNull(),
+		assetId: uuid('asset_id').references(() => assets.id),
+		headerId: uuid('header_id').references(() => headers.id),
+		location: varchar('location', { length: 255 }),
+		notes: text('notes'),
+		inputs: json('inputs').$type<Record<string, unknown>>().notNull(),
+		results: json('results').$type<Record<string, unknown>>(),
+		/** Engine version that produced `results`, so a later engine can recompute. */
+		resultsEngine: varchar('results_engine', { length: 32 }),
+		repairCost: money('repair_cost_minor'),
+		measureId: uuid('measure_id').references(() => measures.id),
+		/** draft | reviewed | published | approved | scheduled | repaired | declined | verified */
+		status: word('status').notNull().default('draft'),
+		recordedBy: uuid('recorded_by').references(() => users.id),
+		recordedAt: at('recorded_at'),
+		deletedAt: at('deleted_at'),
+		version: version(),
+		changeSeq: changeSeq(),
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
+	},
+	(t) => [
+		index('findings_survey_idx').on(t.surveyId),
+		index('findings_asset_idx').on(t.assetId),
+		index('findings_change_idx').on(t.surveyId, t.changeSeq)
+	]
+);
+
+/** A photo of a finding; the bytes live in photo storage under `storageKey`. */
+export const photos = mysqlTable(
+	'photos',
+	{
+		id: id(),
+		findingId: uuid('finding_id')
+			.notNull()
+			.references(() => findings.id),
+		storageKey: varchar('storage_key', { length: 255 }).notNull(),
+		contentType: varchar('content_type', { length: 64 }).notNull(),
+		bytes: int('bytes').notNull(),
+		width: int('width'),
+		height: int('height'),
+		sha256: varchar('sha256', { length: 64 }).notNull(),
+		caption: varchar('caption', { length: 255 }),
+		uploadedBy: uuid('uploaded_by').references(() => users.id),
+		takenAt: at('taken_at'),
+		deletedAt: at('deleted_at'),
+		changeSeq: changeSeq(),
+		createdAt: createdAt()
+	},
+	(t) => [index('photos_finding_idx').on(t.findingId)]
+);
+
+export type FindingRow = typeof findings.$inferSelect;
+export type SurveyRow = typeof surveys.$inferSelect;

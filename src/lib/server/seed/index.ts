@@ -1,0 +1,44 @@
+import { sql } from 'drizzle-orm';
+import type { MySql2Database } from 'drizzle-orm/mysql2';
+import { hashPassword } from '../auth/password';
+import * as schema from '../db/schema';
+import { demoClients, demoFirms, demoPassword, demoSites, demoSurveys, demoUsers } from './demo';
+
+/**
+ * Writes the demo scenario. Idempotent: rows have fixed ids and existing rows are left as
+ * people may have edited them (only missing rows are inserted).
+ */
+export async function seedDemo(db: MySql2Database<typeof schema>): Promise<void> {
+	const { firms, clientCompanies, users, sites, headers, surveys, surveyAuditors } = schema;
+	const keep = { set: { id: sql`id` } };
+	for (const f of demoFirms) {
+		await db
+			.insert(firms)
+			.values({ id: f.id, name: f.name, defaultCurrency: f.currency, defaultUnitSystem: f.units })
+			.onDuplicateKeyUpdate(keep);
+	}
+	await db.insert(clientCompanies).values([...demoClients]).onDuplicateKeyUpdate(keep);
+
+	const passwordHash = await hashPassword(demoPassword);
+	for (const u of demoUsers) {
+		await db
+			.insert(users)
+			.values({ ...u, clientCompanyId: u.clientCompanyId ?? null, passwordHash })
+			.onDuplicateKeyUpdate(keep);
+	}
+	for (const { headers: list, ...site } of demoSites) {
+		await db.insert(sites).values(site).onDuplicateKeyUpdate(keep);
+		for (const h of list) {
+			await db.insert(headers).values({ ...h, siteId: site.id }).onDuplicateKeyUpdate(keep);
+		}
+	}
+	for (const { auditorIds, ...survey } of demoSurveys) {
+		await db.insert(surveys).values(survey).onDuplicateKeyUpdate(keep);
+		for (const userId of auditorIds) {
+			await db
+				.insert(surveyAuditors)
+				.values({ surveyId: survey.id, userId })
+				.onDuplicateKeyUpdate({ set: { userId: sql`user_id` } });
+		}
+	}
+}
