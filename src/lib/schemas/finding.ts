@@ -1,0 +1,328 @@
+/**
+ * A finding: one observation on a survey (a trap test, a leak, an insulation gap, a header
+ * reading). Common fields plus kind-specific `inputs`, in the engine's base units
+ * (p MPa absolute, T K, lengths m, mass flow kg/s). The engine prices it; the server
+ * recomputes every loss itself from these inputs.
+ */
+import { z } from 'zod';
+import {
+	dnSchema,
+	minorUnitsSchema,
+	pressureSchema,
+	temperatureSchema,
+	uuidSchema
+} from './common';
+
+export const FINDING_KINDS = ['trap', 'leak', 'insulation', 'header'] as const;
+export type FindingKind = (typeof FINDING_KINDS)[number];
+
+/** Lifecycle: draft (field) → reviewed (desk) → published → approved/scheduled/repaired/declined → verified. */
+export const FINDING_STATUSES = [
+	'draft',
+	'reviewed',
+	'published',
+	'approved',
+	'scheduled',
+	'repaired',
+	'declined',
+	'verified'
+] as const;
+export type FindingStatus = (typeof FINDING_STATUSES)[number];
+
+export const TRAP_TYPES = [
+	'thermodynamic',
+	'float-thermostatic',
+	'inverted-bucket',
+	'thermostatic',
+	'bimetallic',
+	'fixed-orifice',
+	'other'
+] as const;
+export type TrapType = (typeof TRAP_TYPES)[number];
+
+export const TRAP_CONDITIONS = [
+	'working',
+	'leaking',
+	'failed-open',
+	'failed-closed',
+	'flooded',
+	'out-of-service',
+	'not-accessible'
+] as const;
+export type TrapCondition = (typeof TRAP_CONDITIONS)[number];
+
+export const TRAP_DISCHARGES = ['atmosphere', 'condensate-return'] as const;
+export type TrapDischarge = (typeof TRAP_DISCHARGES)[number];
+
+export const TRAP_TEST_METHODS = ['ultrasound', 'temperature', 'visual', 'combined'] as const;
+export type TrapTestMethod = (typeof TRAP_TEST_METHODS)[number];
+
+/** Leak size classes by what the auditor sees; the engine maps each to a hole diameter. */
+export const LEAK_SIZE_CLASSES = ['pinhole', 'small', 'medium', 'large', 'very-large'] as const;
+export type LeakSizeClass = (typeof LEAK_SIZE_CLASSES)[number];
+
+export const INSULATION_ITEMS = ['pipe', 'valve', 'flange-pair', 'surface'] as const;
+export type InsulationItem = (typeof INSULATION_ITEMS)[number];
+
+export const INSULATION_MATERIALS = ['mineral-wool', 'calcium-silicate', 'cellular-glass'] as const;
+export type InsulationMaterialName = (typeof INSULATION_MATERIALS)[number];
+
+const oneOf = (label: string, values: readonly string[]) => ({
+	error: `${label} must be one of: ${values.join(', ')}`
+});
+
+const operatingHoursSchema = z
+	.number({ error: 'Operating hours must be a number of hours per year' })
+	.gt(0, { error: 'Operating hours must be greater than 0 h per year' })
+	.max(8784, { error: 'Operating hours cannot exceed 8784 h per year (a leap year)' });
+
+/** A diameter in metres, > 0 and at most `max` m. */
+const diameter = (label: string, max: number) =>
+	z
+		.number({ error: `${label} must be a number (metres)` })
+		.positive({ error: `${label} must be greater than 0 m` })
+		.max(max, { error: `${label} must be at most ${max} m` });
+
+const emissivity = (label: string) =>
+	z
+		.number({ error: `${label} must be a number between 0 and 1` })
+		.gt(0, { error: `${label} must be greater than 0` })
+		.max(1, { error: `${label} cannot exceed 1` });
+
+export const trapInputsSchema = z
+	.object({
+		trapType: z.enum(TRAP_TYPES, oneOf('Trap type', TRAP_TYPES)),
+		/** Nominal connection size (DN); sets the default discharge orifice. */
+		dn: dnSchema,
+		/** Discharge orifice diameter, m; defaults from the size and type table when absent. */
+		orificeDiameter: diameter('Orifice diameter', 0.05).optional(),
+		condition: z.enum(TRAP_CONDITIONS, oneOf('Trap condition', TRAP_CONDITIONS)),
+		discharge: z.enum(TRAP_DISCHARGES, oneOf('Discharge', TRAP_DISCHARGES)),
+		/** Pressure the trap discharges into, MPa absolute; required for a condensate return. */
+		backPressure: pressureSchema('Back pressure', 22).optional(),
+		testMethod: z.enum(TRAP_TEST_METHODS, oneOf('Test method', TRAP_TEST_METHODS)).optional(),
+		/** Hours per year this trap is live, overriding the site's operating hours. */
+		operatingHours: operatingHoursSchema.optional(),
+		/** Condensate the trap passes, kg/s: priced as lost water and heat when it goes to drain. */
+		condensateLoad: z
+			.number({ error: 'Condensate load must be a number (kg/s)' })
+			.min(0, { error: 'Condensate load cannot be negative' })
+			.max(50, { error: 'Condensate load must be at most 50 kg/s' })
+			.optional()
+	})
+	.superRefine((trap, ctx) => {
+		if (trap.discharge === 'condensate-return' && trap.backPressure === undefined) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['backPressure'],
+				message: 'A trap discharging to a condensate return needs the return’s back pressure'
+			});
+		}
+	});
+export type TrapInputs = z.infer<typeof trapInputsSchema>;
+
+export const leakInputsSchema = z
+	.object({
+		/** Equivalent hole diameter, m: the round hole that would pass the same steam. */
+		holeDiameter: diameter('Hole diameter', 0.1).optional(),
+		/** A size class chosen from the guidance when the hole cannot be measured. */
+		sizeClass: z.enum(LEAK_SIZE_CLASSES, oneOf('Leak size class', LEAK_SIZE_CLASSES)).optional(),
+		operatingHours: operatingHoursSchema.optional()
+	})
+	.superRefine((leak, ctx) => {
+		if (leak.holeDiameter === undefined && leak.sizeClass === undefined) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['holeDiameter'],
+				message: 'Give the leak’s equivalent hole diameter or choose a size class'
+			});
+		}
+	});
+export type LeakInputs = z.infer<typeof leakInputsSchema>;
+
+export const insulationMaterialSchema = z.union(
+	[
+		z.enum(INSULATION_MATERIALS),
+		z.object({
+			conductivity: z
+				.number({ error: 'Conductivity must be a number (W/(m K))' })
+				.positive({ error: 'Conductivity must be greater than 0 W/(m K)' })
+				.max(1, { error: 'Conductivity must be at most 1 W/(m K) for an insulation' })
+		})
+	],
+	{
+		error: `Material must be one of ${INSULATION_MATERIALS.join(', ')} or a conductivity in W/(m K)`
+	}
+);
+export type InsulationMaterial = z.infer<typeof insulationMaterialSchema>;
+
+export const insulationLayerSchema = z.object({
+	thickness: z
+		.number({ error: 'Layer thickness must be a number (metres)' })
+		.positive({ error: 'Layer thickness must be greater than 0 m' })
+		.max(0.5, { error: 'Layer thickness must be at most 0.5 m' }),
+	material: insulationMaterialSchema
+});
+export type InsulationLayer = z.infer<typeof insulationLayerSchema>;
+
+export const insulationInputsSchema = z
+	.object({
+		item: z.enum(INSULATION_ITEMS, oneOf('Item', INSULATION_ITEMS)),
+		/** Nominal pipe size (DN) of the pipe, valve or flange pair. */
+		dn: dnSchema.optional(),
+		/** Bare outside diameter, m, when it is not a standard pipe size (wins over dn). */
+		outerDiameter: diameter('Outer diameter', 3).optional(),
+		/** Bare length, m (pipe). */
+		length: z
+			.number({ error: 'Length must be a number (metres)' })
+			.positive({ error: 'Length must be greater than 0 m' })
+			.max(10_000, { error: 'Length must be at most 10 000 m' })
+			.optional(),
+		/** Number of bare valves or flange pairs. */
+		count: z
+			.number({ error: 'Count must be a whole number' })
+			.int({ error: 'Count must be a whole number' })
+			.min(1, { error: 'Count must be at least 1' })
+			.max(10_000, { error: 'Count must be at most 10 000' })
+			.optional(),
+		/** Bare area, m² (flat surface: tank, vessel, heat-exchanger shell). */
+		area: z
+			.number({ error: 'Area must be a number (m²)' })
+			.positive({ error: 'Area must be greater than 0 m²' })
+			.max(100_000, { error: 'Area must be at most 100 000 m²' })
+			.optional(),
+		/** Process temperature, K; when absent, the header's steam temperature. */
+		processTemperature: temperatureSchema('Process temperature', 273.15, 1073.15).optional(),
+		ambientTemperature: temperatureSchema('Ambient temperature', 223.15, 333.15),
+		windSpeed: z
+			.number({ error: 'Wind speed must be a number (m/s)' })
+			.min(0, { error: 'Wind speed cannot be negative' })
+			.max(40, { error: 'Wind speed must be at most 40 m/s' }),
+		/** Proposed insulation, innermost layer first. */
+		layers: z
+			.array(insulationLayerSchema, { error: 'Layers must be a list' })
+			.min(1, { error: 'Propose at least one insulation layer' })
+			.max(4, { error: 'At most 4 insulation layers' }),
+		jacketEmissivity: emissivity('Jacket emissivity'),
+		bareEmissivity: emissivity('Bare-surface emissivity'),
+		operatingHours: operatingHoursSchema.optional()
+	})
+	.superRefine((ins, ctx) => {
+		const issue = (path: string, message: string) =>
+			ctx.addIssue({ code: 'custom', path: [path], message });
+		if (ins.item === 'surface') {
+			if (ins.area === undefined) issue('area', 'A flat surface needs its bare area in m²');
+		} else if (ins.dn === undefined && ins.outerDiameter === undefined) {
+			issue('dn', `A ${ins.item} needs a nominal size (DN) or an outer diameter`);
+		}
+		if (ins.item === 'pipe' && ins.length === undefined) {
+			issue('length', 'A bare pipe needs its length in metres');
+		}
+		if ((ins.item === 'valve' || ins.item === 'flange-pair') && ins.count === undefined) {
+			issue('count', `Give the number of bare ${ins.item === 'valve' ? 'valves' : 'flange pairs'}`);
+		}
+		if (ins.processTemperature !== undefined && ins.processTemperature <= ins.ambientTemperature) {
+			issue('processTemperature', 'Process temperature must be above the ambient temperature');
+		}
+	});
+export type InsulationInputs = z.infer<typeof insulationInputsSchema>;
+
+export const headerInputsSchema = z.object({
+	/** Measured line pressure, MPa absolute (the form converts gauge with the site's atmosphere). */
+	measuredPressure: pressureSchema('Measured pressure', 22),
+	/** Measured line temperature, K, when a thermometer reading was taken. */
+	measuredTemperature: temperatureSchema('Measured temperature', 273.16, 1073.15).optional()
+});
+export type HeaderInputs = z.infer<typeof headerInputsSchema>;
+
+const isoDateTime = (label: string) =>
+	z.iso.datetime({ offset: true, error: `${label} must be an ISO 8601 date-time` });
+
+const findingBase = z.object({
+	/** Generated on the device, so a finding has its identity before it ever syncs. */
+	id: uuidSchema,
+	surveyId: uuidSchema,
+	/** The site header it draws steam from; optional only for insulation with its own temperature. */
+	headerId: uuidSchema.optional(),
+	location: z
+		.string({ error: 'Location must be text' })
+		.trim()
+		.max(200, { error: 'Location must be at most 200 characters' }),
+	notes: z
+		.string({ error: 'Notes must be text' })
+		.max(4000, { error: 'Notes must be at most 4000 characters' }),
+	/** The plant's tag on the asset (traps); it carries the asset across surveys. */
+	assetTag: z
+		.string({ error: 'Asset tag must be text' })
+		.trim()
+		.min(1, { error: 'Asset tag cannot be empty; leave it out instead' })
+		.max(64, { error: 'Asset tag must be at most 64 characters' })
+		.optional(),
+	status: z.enum(FINDING_STATUSES, oneOf('Status', FINDING_STATUSES)),
+	/** Repair cost in integer minor units of the site's currency. */
+	repairCost: minorUnitsSchema.optional(),
+	version: z
+		.number({ error: 'Version must be a whole number' })
+		.int({ error: 'Version must be a whole number' })
+		.nonnegative({ error: 'Version cannot be negative' }),
+	createdAt: isoDateTime('Created at'),
+	updatedAt: isoDateTime('Updated at'),
+	deleted: z.boolean({ error: 'Deleted must be true or false' })
+});
+
+export const trapFindingSchema = findingBase.extend({
+	kind: z.literal('trap'),
+	inputs: trapInputsSchema
+});
+export const leakFindingSchema = findingBase.extend({
+	kind: z.literal('leak'),
+	inputs: leakInputsSchema
+});
+export const insulationFindingSchema = findingBase.extend({
+	kind: z.literal('insulation'),
+	inputs: insulationInputsSchema
+});
+export const headerFindingSchema = findingBase.extend({
+	kind: z.literal('header'),
+	inputs: headerInputsSchema
+});
+
+export const findingSchema = z
+	.discriminatedUnion(
+		'kind',
+		[trapFindingSchema, leakFindingSchema, insulationFindingSchema, headerFindingSchema],
+		{ error: `Kind must be one of: ${FINDING_KINDS.join(', ')}` }
+	)
+	.superRefine((finding, ctx) => {
+		if (finding.headerId !== undefined) return;
+		if (finding.kind === 'insulation') {
+			if (finding.inputs.processTemperature === undefined) {
+				ctx.addIssue({
+					code: 'custom',
+					path: ['headerId'],
+					message: 'Choose the header this item carries, or give its process temperature'
+				});
+			}
+			return;
+		}
+		ctx.addIssue({
+			code: 'custom',
+			path: ['headerId'],
+			message: `Choose the header this ${finding.kind} is on`
+		});
+	})
+	.superRefine((finding, ctx) => {
+		if (Date.parse(finding.updatedAt) < Date.parse(finding.createdAt)) {
+			ctx.addIssue({
+				code: 'custom',
+				path: ['updatedAt'],
+				message: 'Updated at cannot be before created at'
+			});
+		}
+	});
+
+export type TrapFinding = z.infer<typeof trapFindingSchema>;
+export type LeakFinding = z.infer<typeof leakFindingSchema>;
+export type InsulationFinding = z.infer<typeof insulationFindingSchema>;
+export type HeaderFinding = z.infer<typeof headerFindingSchema>;
+export type Finding = z.infer<typeof findingSchema>;
