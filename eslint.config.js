@@ -7,13 +7,30 @@ import svelteConfig from './svelte.config.js';
 
 /** Modules the pure engine and unit code must never import. */
 const frameworkImports = [
-	{ group: ['svelte', 'svelte/*', '$app/*', '$env/*', '$lib', '$lib/*'], message: 'The engine is pure: relative imports only, no framework.' },
-	{ group: ['dexie', 'drizzle-orm', 'drizzle-orm/*', 'mysql2', 'mysql2/*', 'node:*', 'fs', 'path'], message: 'The engine is pure: no database or Node imports.' }
+	{
+		group: ['svelte', 'svelte/*', '$app/*', '$env/*', '$lib', '$lib/*'],
+		message: 'The engine is pure: relative imports only, no framework.'
+	},
+	{
+		group: ['dexie', 'drizzle-orm', 'drizzle-orm/*', 'mysql2', 'mysql2/*', 'node:*', 'fs', 'path'],
+		message: 'The engine is pure: no database or Node imports.'
+	}
 ];
 
 export default ts.config(
 	{
-		ignores: ['build/', '.svelte-kit/', 'dist/', 'dev-dist/', 'node_modules/', '.data/', 'drizzle/', 'test-results/', 'playwright-report/', 'tests/reference/.cache/']
+		ignores: [
+			'build/',
+			'.svelte-kit/',
+			'dist/',
+			'dev-dist/',
+			'node_modules/',
+			'.data/',
+			'drizzle/',
+			'test-results/',
+			'playwright-report/',
+			'tests/reference/.cache/'
+		]
 	},
 	js.configs.recommended,
 	...ts.configs.recommended,
@@ -24,7 +41,10 @@ export default ts.config(
 		languageOptions: { globals: { ...globals.browser, ...globals.node } },
 		rules: {
 			'no-undef': 'off',
-			'@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }]
+			'@typescript-eslint/no-unused-vars': [
+				'error',
+				{ argsIgnorePattern: '^_', varsIgnorePattern: '^_' }
+			]
 		}
 	},
 	{

@@ -26,7 +26,11 @@ export function pwaIcons(): Plugin {
 			// SvelteKit runs a client and a server build; icons belong to the client one.
 			if (!String(options.dir ?? '').includes(join('output', 'client'))) return;
 			for (const file of files()) {
-				this.emitFile({ type: 'asset', fileName: `icons/${file}`, source: readFileSync(join(iconsDir, file)) });
+				this.emitFile({
+					type: 'asset',
+					fileName: `icons/${file}`,
+					source: readFileSync(join(iconsDir, file))
+				});
 			}
 		}
 	};

@@ -16,7 +16,12 @@ export const manifest: Partial<ManifestOptions> = {
 	icons: [
 		{ src: '/icons/steamwisp-192.png', sizes: '192x192', type: 'image/png' },
 		{ src: '/icons/steamwisp-512.png', sizes: '512x512', type: 'image/png' },
-		{ src: '/icons/steamwisp-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+		{
+			src: '/icons/steamwisp-maskable-512.png',
+			sizes: '512x512',
+			type: 'image/png',
+			purpose: 'maskable'
+		},
 		{ src: '/icons/steamwisp.svg', sizes: 'any', type: 'image/svg+xml' }
 	]
 };

@@ -17,7 +17,10 @@ export const pwaOptions: SvelteKitPWAOptions = {
 	includeManifestIcons: true,
 	kit: { includeVersionFile: true },
 	workbox: {
-		globPatterns: ['client/**/*.{js,css,html,ico,png,svg,webp,woff,woff2,webmanifest}', 'prerendered/**/*.html'],
+		globPatterns: [
+			'client/**/*.{js,css,html,ico,png,svg,webp,woff,woff2,webmanifest}',
+			'prerendered/**/*.html'
+		],
 		navigateFallback: null,
 		cleanupOutdatedCaches: true,
 		clientsClaim: true,

@@ -6,9 +6,13 @@ import { databaseUrl } from './env.ts';
 
 const connection = await mysql.createConnection({ uri: databaseUrl(), multipleStatements: true });
 try {
-	await migrate(drizzle(connection), { migrationsFolder: new URL('../drizzle', import.meta.url).pathname });
+	await migrate(drizzle(connection), {
+		migrationsFolder: new URL('../drizzle', import.meta.url).pathname
+	});
 	const [rows] = await connection.query('SELECT COUNT(*) AS n FROM __drizzle_migrations');
-	console.log(`steamwisp: database migrated (${(rows as { n: number }[])[0].n} migrations applied)`);
+	console.log(
+		`steamwisp: database migrated (${(rows as { n: number }[])[0].n} migrations applied)`
+	);
 } finally {
 	await connection.end();
 }

@@ -3,7 +3,9 @@ import { z } from 'zod';
 /** Who a person is in a firm (DESIGN.md "People and surfaces"). */
 export const roles = ['admin', 'consultant', 'auditor', 'client'] as const;
 export type Role = (typeof roles)[number];
-export const roleSchema = z.enum(roles, { error: 'Choose a role: admin, consultant, auditor or client.' });
+export const roleSchema = z.enum(roles, {
+	error: 'Choose a role: admin, consultant, auditor or client.'
+});
 
 export const unitSystems = ['SI', 'US'] as const;
 export type UnitSystemId = (typeof unitSystems)[number];

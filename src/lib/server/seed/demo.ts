@@ -8,8 +8,18 @@ import type { Role } from '../../schemas/roles';
 export const demoPassword = 'steam-demo-2026';
 
 export const demoFirms = [
-	{ id: '5e7a0001-0000-4000-8000-000000000001', name: 'Cinderbrook Energy Partners', currency: 'EUR', units: 'SI' },
-	{ id: '5e7a0001-0000-4000-8000-000000000002', name: 'Northgale Steam Advisory', currency: 'USD', units: 'US' }
+	{
+		id: '5e7a0001-0000-4000-8000-000000000001',
+		name: 'Cinderbrook Energy Partners',
+		currency: 'EUR',
+		units: 'SI'
+	},
+	{
+		id: '5e7a0001-0000-4000-8000-000000000002',
+		name: 'Northgale Steam Advisory',
+		currency: 'USD',
+		units: 'US'
+	}
 ] as const;
 
 export const demoClients = [
@@ -37,9 +47,27 @@ export interface DemoUser {
 }
 
 export const demoUsers: DemoUser[] = [
-	{ id: '5e7a0003-0000-4000-8000-000000000001', firmId: demoFirms[0].id, email: 'admin@cinderbrook.example', name: 'Ines Okafor', role: 'admin' },
-	{ id: '5e7a0003-0000-4000-8000-000000000002', firmId: demoFirms[0].id, email: 'consultant@cinderbrook.example', name: 'Tomasz Lindqvist', role: 'consultant' },
-	{ id: '5e7a0003-0000-4000-8000-000000000003', firmId: demoFirms[0].id, email: 'auditor@cinderbrook.example', name: 'Priya Raman', role: 'auditor' },
+	{
+		id: '5e7a0003-0000-4000-8000-000000000001',
+		firmId: demoFirms[0].id,
+		email: 'admin@cinderbrook.example',
+		name: 'Ines Okafor',
+		role: 'admin'
+	},
+	{
+		id: '5e7a0003-0000-4000-8000-000000000002',
+		firmId: demoFirms[0].id,
+		email: 'consultant@cinderbrook.example',
+		name: 'Tomasz Lindqvist',
+		role: 'consultant'
+	},
+	{
+		id: '5e7a0003-0000-4000-8000-000000000003',
+		firmId: demoFirms[0].id,
+		email: 'auditor@cinderbrook.example',
+		name: 'Priya Raman',
+		role: 'auditor'
+	},
 	{
 		id: '5e7a0003-0000-4000-8000-000000000004',
 		firmId: demoFirms[0].id,
@@ -48,9 +76,27 @@ export const demoUsers: DemoUser[] = [
 		role: 'client',
 		clientCompanyId: demoClients[0].id
 	},
-	{ id: '5e7a0003-0000-4000-8000-000000000005', firmId: demoFirms[1].id, email: 'admin@northgale.example', name: 'Ruth Abernathy', role: 'admin' },
-	{ id: '5e7a0003-0000-4000-8000-000000000006', firmId: demoFirms[1].id, email: 'consultant@northgale.example', name: 'Kwame Osei', role: 'consultant' },
-	{ id: '5e7a0003-0000-4000-8000-000000000007', firmId: demoFirms[1].id, email: 'auditor@northgale.example', name: 'Lena Hartmann', role: 'auditor' },
+	{
+		id: '5e7a0003-0000-4000-8000-000000000005',
+		firmId: demoFirms[1].id,
+		email: 'admin@northgale.example',
+		name: 'Ruth Abernathy',
+		role: 'admin'
+	},
+	{
+		id: '5e7a0003-0000-4000-8000-000000000006',
+		firmId: demoFirms[1].id,
+		email: 'consultant@northgale.example',
+		name: 'Kwame Osei',
+		role: 'consultant'
+	},
+	{
+		id: '5e7a0003-0000-4000-8000-000000000007',
+		firmId: demoFirms[1].id,
+		email: 'auditor@northgale.example',
+		name: 'Lena Hartmann',
+		role: 'auditor'
+	},
 	{
 		id: '5e7a0003-0000-4000-8000-000000000008',
 		firmId: demoFirms[1].id,
@@ -73,9 +119,24 @@ export const demoSites = [
 		address: 'Creamery Lane 4, Millbeck (invented)',
 		elevation: 85,
 		headers: [
-			{ id: '5e7a0005-0000-4000-8000-000000000001', name: 'HP boiler header', pressure: barg(10), sortOrder: 1 },
-			{ id: '5e7a0005-0000-4000-8000-000000000002', name: 'Process (evaporators)', pressure: barg(7), sortOrder: 2 },
-			{ id: '5e7a0005-0000-4000-8000-000000000003', name: 'CIP and space heating', pressure: barg(3), sortOrder: 3 }
+			{
+				id: '5e7a0005-0000-4000-8000-000000000001',
+				name: 'HP boiler header',
+				pressure: barg(10),
+				sortOrder: 1
+			},
+			{
+				id: '5e7a0005-0000-4000-8000-000000000002',
+				name: 'Process (evaporators)',
+				pressure: barg(7),
+				sortOrder: 2
+			},
+			{
+				id: '5e7a0005-0000-4000-8000-000000000003',
+				name: 'CIP and space heating',
+				pressure: barg(3),
+				sortOrder: 3
+			}
 		]
 	},
 	{
@@ -86,8 +147,18 @@ export const demoSites = [
 		address: 'River Road, Orrin Valley (invented)',
 		elevation: 240,
 		headers: [
-			{ id: '5e7a0005-0000-4000-8000-000000000011', name: 'Dryer section', pressure: barg(11), sortOrder: 1 },
-			{ id: '5e7a0005-0000-4000-8000-000000000012', name: 'Low-pressure', pressure: barg(3.5), sortOrder: 2 }
+			{
+				id: '5e7a0005-0000-4000-8000-000000000011',
+				name: 'Dryer section',
+				pressure: barg(11),
+				sortOrder: 1
+			},
+			{
+				id: '5e7a0005-0000-4000-8000-000000000012',
+				name: 'Low-pressure',
+				pressure: barg(3.5),
+				sortOrder: 2
+			}
 		]
 	}
 ] as const;

@@ -17,7 +17,10 @@ export async function seedDemo(db: MySql2Database<typeof schema>): Promise<void>
 			.values({ id: f.id, name: f.name, defaultCurrency: f.currency, defaultUnitSystem: f.units })
 			.onDuplicateKeyUpdate(keep);
 	}
-	await db.insert(clientCompanies).values([...demoClients]).onDuplicateKeyUpdate(keep);
+	await db
+		.insert(clientCompanies)
+		.values([...demoClients])
+		.onDuplicateKeyUpdate(keep);
 
 	const passwordHash = await hashPassword(demoPassword);
 	for (const u of demoUsers) {
@@ -29,7 +32,10 @@ export async function seedDemo(db: MySql2Database<typeof schema>): Promise<void>
 	for (const { headers: list, ...site } of demoSites) {
 		await db.insert(sites).values(site).onDuplicateKeyUpdate(keep);
 		for (const h of list) {
-			await db.insert(headers).values({ ...h, siteId: site.id }).onDuplicateKeyUpdate(keep);
+			await db
+				.insert(headers)
+				.values({ ...h, siteId: site.id })
+				.onDuplicateKeyUpdate(keep);
 		}
 	}
 	for (const { auditorIds, ...survey } of demoSurveys) {

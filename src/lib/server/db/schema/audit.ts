@@ -19,7 +19,10 @@ export const auditLog = mysqlTable(
 		address: varchar('address', { length: 64 }),
 		createdAt: createdAt()
 	},
-	(t) => [index('audit_entity_idx').on(t.entity, t.entityId), index('audit_firm_idx').on(t.firmId, t.createdAt)]
+	(t) => [
+		index('audit_entity_idx').on(t.entity, t.entityId),
+		index('audit_firm_idx').on(t.firmId, t.createdAt)
+	]
 );
 
 /**

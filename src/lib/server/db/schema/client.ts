@@ -25,7 +25,10 @@ export const decisions = mysqlTable(
 			.references(() => users.id),
 		createdAt: createdAt()
 	},
-	(t) => [index('decisions_finding_idx').on(t.findingId), index('decisions_measure_idx').on(t.measureId)]
+	(t) => [
+		index('decisions_finding_idx').on(t.findingId),
+		index('decisions_measure_idx').on(t.measureId)
+	]
 );
 
 /** Conversation on a finding, a measure or the survey as a whole. */

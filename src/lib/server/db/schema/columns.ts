@@ -27,6 +27,7 @@ export const at = (name: string) => datetime(name, { mode: 'date', fsp: 3 });
 /** Optimistic-concurrency version: bumped on every accepted change, compared on sync. */
 export const version = () => int('version').notNull().default(1);
 /** Position in the firm's change feed: the monotonic cursor the device pulls from. */
-export const changeSeq = () => bigint('change_seq', { mode: 'number', unsigned: true }).notNull().default(0);
+export const changeSeq = () =>
+	bigint('change_seq', { mode: 'number', unsigned: true }).notNull().default(0);
 /** Money in integer minor units of the site's currency (cents, pence…), never floating point. */
 export const money = (name: string) => bigint(name, { mode: 'number' });

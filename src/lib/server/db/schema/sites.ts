@@ -1,4 +1,13 @@
-import { double, index, int, json, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import {
+	double,
+	index,
+	int,
+	json,
+	mysqlTable,
+	text,
+	uniqueIndex,
+	varchar
+} from 'drizzle-orm/mysql-core';
 import { at, changeSeq, createdAt, id, updatedAt, uuid, version, word } from './columns';
 import { clientCompanies, firms } from './tenancy';
 

@@ -1,4 +1,13 @@
-import { date, index, int, json, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
+import {
+	date,
+	index,
+	int,
+	json,
+	mysqlTable,
+	primaryKey,
+	text,
+	varchar
+} from 'drizzle-orm/mysql-core';
 import { at, changeSeq, createdAt, id, money, updatedAt, uuid, version, word } from './columns';
 import { assets, headers, sites } from './sites';
 import { firms, users } from './tenancy';
@@ -41,7 +50,10 @@ export const surveyAuditors = mysqlTable(
 			.references(() => users.id),
 		assignedAt: createdAt()
 	},
-	(t) => [primaryKey({ columns: [t.surveyId, t.userId] }), index('survey_auditors_user_idx').on(t.userId)]
+	(t) => [
+		primaryKey({ columns: [t.surveyId, t.userId] }),
+		index('survey_auditors_user_idx').on(t.userId)
+	]
 );
 
 /** A group of findings repaired as one job ("replace 14 traps in the dryer hall"). */

@@ -1,4 +1,13 @@
-import { boolean, char, index, json, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import {
+	boolean,
+	char,
+	index,
+	json,
+	mysqlTable,
+	text,
+	uniqueIndex,
+	varchar
+} from 'drizzle-orm/mysql-core';
 import { at, createdAt, id, updatedAt, uuid, word } from './columns';
 
 /** A consulting firm: the tenant. Everything else hangs off one firm. */

@@ -1,0 +1,45 @@
+import { DrizzleMySQLAdapter } from '@lucia-auth/adapter-drizzle';
+import { Lucia, TimeSpan } from 'lucia';
+import { dev } from '$app/environment';
+import { db } from '../db';
+import { sessions, users } from '../db/schema';
+import type { Role } from '$lib/schemas/roles';
+
+const adapter = new DrizzleMySQLAdapter(db, sessions, users);
+
+/**
+ * Sessions: 12-hour lifetime, extended on use (lucia refreshes a session in its second half);
+ * cookie HttpOnly, SameSite=Lax, Secure whenever the app is not in dev (production runs behind
+ * HTTPS; set STEAMWISP_INSECURE_COOKIES=1 only for plain-HTTP local runs).
+ */
+export const lucia = new Lucia(adapter, {
+	sessionExpiresIn: new TimeSpan(12, 'h'),
+	sessionCookie: {
+		name: 'steamwisp_session',
+		attributes: { secure: !dev && process.env.STEAMWISP_INSECURE_COOKIES !== '1', sameSite: 'lax' }
+	},
+	getUserAttributes: (row) => ({
+		firmId: row.firmId,
+		email: row.email,
+		name: row.name,
+		role: row.role as Role,
+		clientCompanyId: row.clientCompanyId,
+		disabledAt: row.disabledAt
+	})
+});
+
+declare module 'lucia' {
+	interface Register {
+		Lucia: typeof lucia;
+		/** Column properties as the Drizzle adapter returns them (camelCase). */
+		DatabaseUserAttributes: {
+			firmId: string;
+			email: string;
+			name: string;
+			role: string;
+			clientCompanyId: string | null;
+			disabledAt: Date | null;
+		};
+		DatabaseSessionAttributes: { userAgent: string | null };
+	}
+}
