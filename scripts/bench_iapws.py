@@ -1,0 +1,66 @@
+#!/usr/bin/python3
+"""Evaluations per second of Debian's python3-iapws for the operations scripts/bench.ts times.
+
+Reads {"seconds": s, "inputs": {operation: [[a, b], ...] or [a, ...]}} on stdin; prints JSON
+{"library": ..., "evalsPerSecond": {operation: n}, "core": {operation: n}} on stdout.
+Each operation runs through its inputs, over and over, for about s seconds after a warm-up,
+timed with time.perf_counter around whole passes so the clock is not read per call.
+"core" times the bare region functions _Region1 and _Region2, which skip the transport and
+derived properties IAPWS97() also computes, for a like-for-like view of the arithmetic.
+"""
+
+import json
+import subprocess
+import sys
+import time
+
+from iapws import IAPWS97
+from iapws import iapws97 as if97
+
+OPERATIONS = {
+    "ptRegion1": lambda p, T: IAPWS97(P=p, T=T),
+    "ptRegion2": lambda p, T: IAPWS97(P=p, T=T),
+    # python3-iapws has no lighter public entry for Tsat(p): its own Eq. 31 function is the match.
+    "saturationTemperature": if97._TSat_P,
+    "ph": lambda p, h: IAPWS97(P=p, h=h),
+    "ps": lambda p, s: IAPWS97(P=p, s=s),
+}
+CORE = {
+    "ptRegion1": lambda p, T: if97._Region1(T, p),
+    "ptRegion2": lambda p, T: if97._Region2(T, p),
+}
+
+
+def rate(fn, inputs, seconds):
+    calls = [args if isinstance(args, list) else [args] for args in inputs]
+    for args in calls[:50]:
+        fn(*args)
+    count, start = 0, time.perf_counter()
+    while True:
+        for args in calls:
+            fn(*args)
+        count += len(calls)
+        elapsed = time.perf_counter() - start
+        if elapsed >= seconds:
+            return count / elapsed
+
+
+def version():
+    out = subprocess.run(["dpkg-query", "-W", "-f=${Version}", "python3-iapws"],
+                         capture_output=True, text=True)
+    return "Debian python3-iapws " + (out.stdout.strip() or "unknown")
+
+
+def main():
+    job = json.load(sys.stdin)
+    seconds, inputs = job["seconds"], job["inputs"]
+    result = {
+        "library": version(),
+        "evalsPerSecond": {op: rate(fn, inputs[op], seconds) for op, fn in OPERATIONS.items()},
+        "core": {op: rate(fn, inputs[op], seconds / 2) for op, fn in CORE.items()},
+    }
+    json.dump(result, sys.stdout)
+
+
+if __name__ == "__main__":
+    main()
