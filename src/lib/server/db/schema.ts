@@ -7,3 +7,4 @@ export * from './schema/sites';
 export * from './schema/surveys';
 export * from './schema/client';
 export * from './schema/audit';
+export * from './schema/auth';
