@@ -192,12 +192,12 @@ export const insulationInputsSchema = z
 			.max(100_000, { error: 'Area must be at most 100 000 m²' })
 			.optional(),
 		/** Process temperature, K; when absent, the header's steam temperature. */
-		processTemperature: temperatureSchema('Process temperature', 273.15, 1073.15).optional(),
+		processTemperature: temperatureSchema('Process temperature', 273.15, 923.15).optional(),
 		ambientTemperature: temperatureSchema('Ambient temperature', 223.15, 333.15),
 		windSpeed: z
 			.number({ error: 'Wind speed must be a number (m/s)' })
 			.min(0, { error: 'Wind speed cannot be negative' })
-			.max(40, { error: 'Wind speed must be at most 40 m/s' }),
+			.max(35, { error: 'Wind speed must be at most 35 m/s' }),
 		/** Proposed insulation, innermost layer first. */
 		layers: z
 			.array(insulationLayerSchema, { error: 'Layers must be a list' })

@@ -33,8 +33,9 @@ describe('costBasisSchema', () => {
 			{ kind: 'natural-gas', price: '0.35', unit: 'm3' },
 			{ kind: 'fuel-oil-2', price: '3.10', unit: 'US-gal' },
 			{ kind: 'lpg', price: '0.9', unit: 'L' },
-			{ kind: 'coal', price: '120', unit: 't' },
-			{ kind: 'biomass', price: '55.5', unit: 'short-ton' },
+			{ kind: 'coal', price: '120', unit: 't', energyContent: 25.8 },
+			{ kind: 'biomass', price: '55.5', unit: 'short-ton', energyContent: 15.3 },
+			{ kind: 'coal', price: '4.1', unit: 'MMBtu' },
 			{ kind: 'natural-gas', price: '1.2', unit: 'therm' }
 		]) {
 			expect(costBasisSchema.safeParse({ ...validBasis, fuel }).success).toBe(true);
@@ -83,13 +84,23 @@ describe('costBasisSchema', () => {
 			fuel: { kind: 'custom', price: '40', unit: 'kg' }
 		});
 		expect(messages(without)).toContain(
-			'fuel.energyContent: A custom fuel priced per kg needs its energy content in GJ per kg'
+			'fuel.energyContent: There is no standard energy content for custom per kg: enter it in GJ per kg'
 		);
 		const withContent = costBasisSchema.safeParse({
 			...base,
 			fuel: { kind: 'custom', price: '40', unit: 'kg', energyContent: 0.03 }
 		});
 		expect(withContent.success).toBe(true);
+	});
+
+	it('requires an energy content for coal per tonne, where rank and moisture vary too much', () => {
+		const coal = costBasisSchema.safeParse({
+			...validBasis,
+			fuel: { kind: 'coal', price: '120', unit: 't' }
+		});
+		expect(messages(coal)).toContain(
+			'fuel.energyContent: There is no standard energy content for coal per t: enter it in GJ per t'
+		);
 	});
 
 	it('requires an emission factor for electricity and custom fuels only', () => {

@@ -10,6 +10,7 @@ import {
 	temperatureSchema,
 	uuidSchema
 } from './common';
+import { defaultEnergyContent } from '../steam/losses/fuels';
 
 export const FUEL_KINDS = [
 	'natural-gas',
@@ -59,7 +60,8 @@ export const fuelSchema = z
 		}),
 		/**
 		 * Energy content in GJ per priced unit (higher heating value), overriding the fuel's
-		 * default. Required for a custom fuel priced per quantity rather than per energy.
+		 * default. Required for a quantity unit without a published default (custom fuels,
+		 * coal and biomass per mass, oils per mass).
 		 */
 		energyContent: z
 			.number({ error: 'Energy content must be a number (GJ per unit)' })
@@ -77,11 +79,11 @@ export const fuelSchema = z
 				message: `${article(fuel.kind)} ${fuel.kind} price cannot be per ${fuel.unit}; use one of: ${allowed.join(', ')}`
 			});
 		}
-		if (fuel.kind === 'custom' && fuel.energyContent === undefined) {
+		if (fuel.energyContent === undefined && defaultEnergyContent(fuel.kind, fuel.unit) === null) {
 			ctx.addIssue({
 				code: 'custom',
 				path: ['energyContent'],
-				message: `A custom fuel priced per ${fuel.unit} needs its energy content in GJ per ${fuel.unit}`
+				message: `There is no standard energy content for ${fuel.kind} per ${fuel.unit}: enter it in GJ per ${fuel.unit}`
 			});
 		}
 	});
