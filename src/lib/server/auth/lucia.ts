@@ -1,6 +1,7 @@
 import { DrizzleMySQLAdapter } from '@lucia-auth/adapter-drizzle';
 import { Lucia, TimeSpan } from 'lucia';
 import { dev } from '$app/environment';
+import { env } from '$env/dynamic/private';
 import { db } from '../db';
 import { sessions, users } from '../db/schema';
 import type { Role } from '$lib/schemas/roles';
@@ -9,14 +10,16 @@ const adapter = new DrizzleMySQLAdapter(db, sessions, users);
 
 /**
  * Sessions: 12-hour lifetime, extended on use (lucia refreshes a session in its second half);
- * cookie HttpOnly, SameSite=Lax, Secure whenever the app is not in dev (production runs behind
- * HTTPS; set STEAMWISP_INSECURE_COOKIES=1 only for plain-HTTP local runs).
+ * cookie HttpOnly, SameSite=Lax, and Secure unless the app is served over plain HTTP
+ * (ORIGIN=http://…, as on a developer's loopback).
  */
+const plainHttp = dev || /^http:\/\//.test(env.ORIGIN ?? '');
+
 export const lucia = new Lucia(adapter, {
 	sessionExpiresIn: new TimeSpan(12, 'h'),
 	sessionCookie: {
 		name: 'steamwisp_session',
-		attributes: { secure: !dev && process.env.STEAMWISP_INSECURE_COOKIES !== '1', sameSite: 'lax' }
+		attributes: { secure: !plainHttp, sameSite: 'lax' }
 	},
 	getUserAttributes: (row) => ({
 		firmId: row.firmId,
