@@ -69,15 +69,31 @@ export function formatSignificant(value: number, options: NumberFormatOptions = 
 	const rounded = roundToSignificant(value, sigFigs);
 	const magnitude = Math.abs(rounded);
 	const plain = magnitude === 0 || (magnitude >= PLAIN_MIN && magnitude < PLAIN_MAX);
+	return formatterFor(options, sigFigs, plain).format(rounded);
+}
+
+/** Building an Intl.NumberFormat costs far more than using one: keep them per option set. */
+const formatters = new Map<string, Intl.NumberFormat>();
+
+function formatterFor(options: NumberFormatOptions, sigFigs: number, plain: boolean) {
 	const locale = (options.locale as string | string[] | undefined) ?? DEFAULT_LOCALE;
-	const format = new Intl.NumberFormat(locale, {
-		notation: plain ? 'standard' : 'scientific',
-		maximumSignificantDigits: sigFigs,
-		minimumSignificantDigits: options.keepTrailingZeros ? sigFigs : 1,
-		// 'auto' follows the locale's own rule (Spanish does not group four-digit numbers).
-		useGrouping: options.grouping === false ? false : 'auto',
-		// A value that rounds to zero reads "0", never "-0".
-		signDisplay: 'negative'
-	});
-	return format.format(rounded);
+	const keepZeros = options.keepTrailingZeros === true;
+	const grouping = options.grouping !== false;
+	const key = JSON.stringify([locale, sigFigs, plain, keepZeros, grouping]);
+	let format = formatters.get(key);
+	if (!format) {
+		format = new Intl.NumberFormat(locale, {
+			notation: plain ? 'standard' : 'scientific',
+			maximumSignificantDigits: sigFigs,
+			minimumSignificantDigits: keepZeros ? sigFigs : 1,
+			// 'auto' follows the locale's own rule (Spanish does not group four-digit numbers).
+			useGrouping: grouping ? 'auto' : false,
+			// A value that rounds to zero reads "0", never "-0".
+			signDisplay: 'negative'
+		});
+		// Option sets in use are few; the bound only guards against a caller varying locales freely.
+		if (formatters.size >= 64) formatters.clear();
+		formatters.set(key, format);
+	}
+	return format;
 }
