@@ -27,7 +27,7 @@ export function heapFigures(startHeap: number): string[] {
 	for (let i = 0; i < STATES; i++) held[i] = stateFromPT(0.1 + (i % 200) * 0.1, 300 + (i % 50));
 	const perState = (heapUsed() - before) / STATES;
 	return [
-		`heap used after the timed runs minus before them: ${((afterRun - startHeap) / 1024).toFixed(0)} KiB`,
+		`heap used after the timed runs minus before them (JIT code and feedback included): ${((afterRun - startHeap) / 1024).toFixed(0)} KiB`,
 		`heap held per returned state object: ${perState.toFixed(0)} bytes (${held.length} kept alive)`
 	];
 }

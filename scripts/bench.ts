@@ -4,6 +4,7 @@
  * engine's issue. Benchmarks print figures; tests never time things.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
+import { availableParallelism, loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import {
 	saturationTemperature,
@@ -81,22 +82,37 @@ const ROWS: { op: Operation; label: string; pass: Pass; target?: number }[] = [
 
 let sink = 0;
 
-/** Evaluations per second, timing whole passes so the clock is not read per call. */
-function rate(pass: Pass, a: Float64Array, b: Float64Array, seconds: number): number {
+/** Seconds of CPU this process has used (all its threads, so GC and JIT count against us). */
+const cpuSeconds = () => {
+	const { user, system } = process.cpuUsage();
+	return (user + system) / 1e6;
+};
+
+/**
+ * Evaluations per CPU second and per wall-clock second, timing whole passes so the clocks are
+ * not read per call. CPU time is what the table shows: on a shared machine other work steals
+ * wall-clock time from both sides unevenly, while CPU time stays the cost of the operation.
+ */
+function rate(pass: Pass, a: Float64Array, b: Float64Array, seconds: number) {
 	let count = 0;
-	const start = performance.now();
+	const wall = performance.now();
+	const cpu = cpuSeconds();
 	for (;;) {
 		sink += pass(a, b);
 		count += a.length;
-		const elapsed = (performance.now() - start) / 1000;
-		if (elapsed >= seconds) return count / elapsed;
+		const used = cpuSeconds() - cpu;
+		if (used >= seconds)
+			return { cpu: count / used, wall: count / ((performance.now() - wall) / 1000) };
 	}
 }
 
+type Rates = Record<Operation, number>;
+
 interface PythonRates {
 	library: string;
-	evalsPerSecond: Record<Operation, number>;
-	core: Partial<Record<Operation, number>>;
+	cpu: Rates;
+	wall: Rates;
+	core: Partial<Rates>;
 }
 
 /** The same operations through python3-iapws, or null when it is not installed. */
@@ -119,61 +135,79 @@ function si(n: number): string {
 }
 
 const verdict = (ok: boolean) => (ok ? 'pass' : 'FAIL');
-const cells = (...c: string[]) =>
-	c[0].padEnd(24) +
-	c
-		.slice(1, 4)
-		.map((x) => x.padStart(12))
+const row = (name: string, ...rest: string[]) =>
+	name.padEnd(24) +
+	rest
+		.slice(0, 3)
+		.map((c) => c.padStart(12))
 		.join('') +
-	`  ${c[4]}`;
+	`  ${rest[3]}`;
 
-function main(): void {
-	const inputs = benchInputs();
-	const startHeap = heapUsed();
-	const ours = new Map<Operation, number>();
-	for (const { op, pass } of ROWS) {
-		rate(pass, inputs[op].a, inputs[op].b, WARM_UP_S);
-		ours.set(op, rate(pass, inputs[op].a, inputs[op].b, MEASURE_S));
-	}
-	const memory = heapFigures(startHeap);
-	const python = pythonRates(inputs);
-	const lines = [
-		`Node ${process.version}, one thread, ${MEASURE_S} s per operation after ${WARM_UP_S} s warm-up`,
-		python
-			? `beside ${python.library} (IAPWS-IF97), IAPWS97() calls (its _TSat_P for saturationTemperature), ${PYTHON_S} s each`
-			: 'python3-iapws not found (apt-get install -y python3-iapws): engine figures only',
-		'',
-		cells('operation', 'Steamwisp/s', 'iapws/s', 'ratio', 'targets')
-	];
+/** The side-by-side table: evaluations per CPU second, the ratio, and the issue's targets. */
+function table(ours: { cpu: Rates; wall: Rates }, python: PythonRates | null): string[] {
+	const lines = [row('operation', 'Steamwisp/s', 'iapws/s', 'ratio', 'targets')];
 	for (const { op, label, target } of ROWS) {
-		const mine = ours.get(op) ?? 0;
-		const theirs = python?.evalsPerSecond[op];
+		const mine = ours.cpu[op];
+		const theirs = python?.cpu[op];
 		const ratio = theirs ? mine / theirs : undefined;
 		const targets = [
 			target ? `≥ ${si(target)}/s ${verdict(mine >= target)}` : '',
 			ratio === undefined ? '' : `≥ ${MIN_RATIO}× python ${verdict(ratio >= MIN_RATIO)}`
 		];
-		const theirCell = theirs ? si(theirs) : '–';
 		const ratioCell = ratio ? `${ratio.toFixed(0)}×` : '–';
-		lines.push(cells(label, si(mine), theirCell, ratioCell, targets.filter(Boolean).join('; ')));
-	}
-	if (python) {
 		lines.push(
-			'',
-			'IAPWS97() also computes transport and derived properties; the bare region functions:'
+			row(label, si(mine), theirs ? si(theirs) : '–', ratioCell, targets.filter(Boolean).join('; '))
 		);
-		for (const [op, name] of [
-			['ptRegion1', '_Region1'],
-			['ptRegion2', '_Region2']
-		] as const) {
-			const core = python.core[op] ?? 0;
-			lines.push(
-				`  ${name}(T, p) ${si(core)}/s, Steamwisp ${((ours.get(op) ?? 0) / core).toFixed(0)}× that`
-			);
-		}
 	}
-	lines.push('', ...memory, `(checksum ${sink.toPrecision(6)})`);
-	console.log(lines.join('\n'));
+	const wall = (r: Rates) => ROWS.map(({ op }) => si(r[op])).join(', ');
+	lines.push('', `per wall-clock second, same order: Steamwisp ${wall(ours.wall)}`);
+	if (!python) return lines;
+	lines.push(`  python3-iapws ${wall(python.wall)}`);
+	lines.push(
+		'IAPWS97() also computes transport and derived properties; its bare region functions:'
+	);
+	for (const [op, name] of [
+		['ptRegion1', '_Region1'],
+		['ptRegion2', '_Region2']
+	] as const) {
+		const core = python.core[op] ?? NaN;
+		lines.push(
+			`  ${name}(T, p) ${si(core)}/s, Steamwisp ${(ours.cpu[op] / core).toFixed(0)}× that`
+		);
+	}
+	return lines;
+}
+
+function main(): void {
+	const inputs = benchInputs();
+	const startHeap = heapUsed();
+	const ours = { cpu: {} as Rates, wall: {} as Rates };
+	for (const { op, pass } of ROWS) {
+		rate(pass, inputs[op].a, inputs[op].b, WARM_UP_S);
+		({ cpu: ours.cpu[op], wall: ours.wall[op] } = rate(
+			pass,
+			inputs[op].a,
+			inputs[op].b,
+			MEASURE_S
+		));
+	}
+	const memory = heapFigures(startHeap);
+	const python = pythonRates(inputs);
+	const load = loadavg()[0].toFixed(1);
+	console.log(
+		[
+			`Node ${process.version}, one thread, ${MEASURE_S} CPU-seconds per operation after ${WARM_UP_S} s warm-up;`,
+			`load average ${load} on ${availableParallelism()} CPUs (rates are per CPU second of this process)`,
+			python
+				? `beside ${python.library} (IAPWS-IF97): IAPWS97() calls, _TSat_P for saturationTemperature`
+				: 'python3-iapws not found (apt-get install -y python3-iapws): engine figures only',
+			'',
+			...table(ours, python),
+			'',
+			...memory,
+			`(checksum ${sink.toPrecision(6)})`
+		].join('\n')
+	);
 }
 
 main();

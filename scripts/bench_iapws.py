@@ -2,9 +2,10 @@
 """Evaluations per second of Debian's python3-iapws for the operations scripts/bench.ts times.
 
 Reads {"seconds": s, "inputs": {operation: [[a, b], ...] or [a, ...]}} on stdin; prints JSON
-{"library": ..., "evalsPerSecond": {operation: n}, "core": {operation: n}} on stdout.
-Each operation runs through its inputs, over and over, for about s seconds after a warm-up,
-timed with time.perf_counter around whole passes so the clock is not read per call.
+{"library": ..., "cpu": {operation: n}, "wall": {operation: n}, "core": {operation: n}}.
+Each operation runs through its inputs, over and over, for about s seconds of CPU after a
+warm-up, timed around whole passes so the clocks are not read per call: evaluations per CPU
+second (time.process_time) and per wall-clock second (time.perf_counter).
 "core" times the bare region functions _Region1 and _Region2, which skip the transport and
 derived properties IAPWS97() also computes, for a like-for-like view of the arithmetic.
 """
@@ -35,14 +36,14 @@ def rate(fn, inputs, seconds):
     calls = [args if isinstance(args, list) else [args] for args in inputs]
     for args in calls[:50]:
         fn(*args)
-    count, start = 0, time.perf_counter()
+    count, wall, cpu = 0, time.perf_counter(), time.process_time()
     while True:
         for args in calls:
             fn(*args)
         count += len(calls)
-        elapsed = time.perf_counter() - start
-        if elapsed >= seconds:
-            return count / elapsed
+        used = time.process_time() - cpu
+        if used >= seconds:
+            return {"cpu": count / used, "wall": count / (time.perf_counter() - wall)}
 
 
 def version():
@@ -54,10 +55,12 @@ def version():
 def main():
     job = json.load(sys.stdin)
     seconds, inputs = job["seconds"], job["inputs"]
+    rates = {op: rate(fn, inputs[op], seconds) for op, fn in OPERATIONS.items()}
     result = {
         "library": version(),
-        "evalsPerSecond": {op: rate(fn, inputs[op], seconds) for op, fn in OPERATIONS.items()},
-        "core": {op: rate(fn, inputs[op], seconds / 2) for op, fn in CORE.items()},
+        "cpu": {op: r["cpu"] for op, r in rates.items()},
+        "wall": {op: r["wall"] for op, r in rates.items()},
+        "core": {op: rate(fn, inputs[op], seconds / 2)["cpu"] for op, fn in CORE.items()},
     }
     json.dump(result, sys.stdout)
 
