@@ -77,14 +77,17 @@ export const F_XY = 5;
 
 /**
  * Σ nᵢ · x^Iᵢ · y^Jᵢ with its first and second partial derivatives: the Gibbs equations of
- * regions 1, 2 and 5. A derivative term whose factor (I, I(I−1), J, …) is zero points at the
- * term's own power, so no power below what the equation needs is ever formed (x or y may be
- * near zero where the equation never uses a negative power of it).
+ * regions 1, 2 and 5. One pass sums nᵢ·x^Iᵢ·y^Jᵢ weighted by I, I(I−1), J, J(J−1) and IJ;
+ * the derivatives follow by dividing by x and y once at the end. So x and y must not be zero,
+ * which holds everywhere the regions are used (region 1: x = 7.1 − π ≥ 1.05, y = τ − 1.222
+ * ≥ 1.0; region 2: y = τ − 0.5 ≥ 0.003 up to 1073.15 K; region 5: y = τ ≥ 0.44).
  */
 export class GibbsSeries {
-	private readonly c: Float64Array[];
-	private readonly ix: Int32Array[];
-	private readonly iy: Int32Array[];
+	private readonly n: Float64Array;
+	private readonly i: Float64Array;
+	private readonly j: Float64Array;
+	private readonly ix: Int32Array;
+	private readonly iy: Int32Array;
 	private readonly xLo: number;
 	private readonly xHi: number;
 	private readonly yLo: number;
@@ -94,43 +97,48 @@ export class GibbsSeries {
 
 	constructor(I: readonly number[], J: readonly number[], n: readonly number[]) {
 		checkShape(I, J, n);
-		// Order of the six sums: f, f_x, f_xx, f_y, f_yy, f_xy (slots F … F_XY).
-		const dx = [0, 1, 2, 0, 0, 1];
-		const dy = [0, 0, 0, 1, 2, 1];
-		const factor = (e: number, d: number) => (d === 0 ? 1 : d === 1 ? e : e * (e - 1));
-		const xs: number[] = [];
-		const ys: number[] = [];
-		const terms = dx.map((_, slot) =>
-			n.map((nk, k) => {
-				const c = nk * factor(I[k], dx[slot]) * factor(J[k], dy[slot]);
-				const ex = c === 0 ? I[k] : I[k] - dx[slot];
-				const ey = c === 0 ? J[k] : J[k] - dy[slot];
-				xs.push(ex);
-				ys.push(ey);
-				return { c, ex, ey };
-			})
-		);
-		[this.xLo, this.xHi] = range(xs);
-		[this.yLo, this.yHi] = range(ys);
-		this.c = terms.map((t) => Float64Array.from(t, (term) => term.c));
-		this.ix = terms.map((t) => Int32Array.from(t, (term) => term.ex - this.xLo));
-		this.iy = terms.map((t) => Int32Array.from(t, (term) => term.ey - this.yLo));
+		[this.xLo, this.xHi] = range(I);
+		[this.yLo, this.yHi] = range(J);
+		this.n = Float64Array.from(n);
+		this.i = Float64Array.from(I);
+		this.j = Float64Array.from(J);
+		this.ix = Int32Array.from(I, (e) => e - this.xLo);
+		this.iy = Int32Array.from(J, (e) => e - this.yLo);
 		this.px = new Float64Array(this.xHi - this.xLo + 1);
 		this.py = new Float64Array(this.yHi - this.yLo + 1);
 	}
 
-	/** Writes f, f_x, f_xx, f_y, f_yy, f_xy at (x, y) into out[F … F_XY]. */
+	/** Writes f, f_x, f_xx, f_y, f_yy, f_xy at (x, y) into out[F … F_XY]; x, y ≠ 0. */
 	evaluate(x: number, y: number, out: Float64Array): void {
-		const { px, py } = this;
+		const { n, i, j, ix, iy, px, py } = this;
 		fillPowers(px, x, this.xLo, this.xHi);
 		fillPowers(py, y, this.yLo, this.yHi);
-		for (let slot = 0; slot < 6; slot++) {
-			const c = this.c[slot];
-			const ix = this.ix[slot];
-			const iy = this.iy[slot];
-			let sum = 0;
-			for (let k = 0; k < c.length; k++) sum += c[k] * px[ix[k]] * py[iy[k]];
-			out[slot] = sum;
+		let f = 0;
+		let fx = 0;
+		let fxx = 0;
+		let fy = 0;
+		let fyy = 0;
+		let fxy = 0;
+		for (let k = 0; k < n.length; k++) {
+			const t = n[k] * px[ix[k]] * py[iy[k]];
+			const ik = i[k];
+			const jk = j[k];
+			const it = ik * t;
+			const jt = jk * t;
+			f += t;
+			fx += it;
+			fxx += (ik - 1) * it;
+			fy += jt;
+			fyy += (jk - 1) * jt;
+			fxy += jk * it;
 		}
+		const rx = 1 / x;
+		const ry = 1 / y;
+		out[F] = f;
+		out[F_X] = fx * rx;
+		out[F_XX] = fxx * rx * rx;
+		out[F_Y] = fy * ry;
+		out[F_YY] = fyy * ry * ry;
+		out[F_XY] = fxy * rx * ry;
 	}
 }
