@@ -1,0 +1,9 @@
+#!/usr/bin/env bash
+# npm run dev — Vite's dev server with hot reload on the dev database (started if needed).
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+ensure_node_modules
+bash scripts/db.sh up
+npx tsx scripts/migrate.ts
+# Started directly (not through npx) so Ctrl-C stops the server itself (STACK.md gotcha 4).
+exec node_modules/.bin/vite dev --host "$APP_HOST" --port "${PORT:-5173}"
