@@ -78,6 +78,13 @@ describe('insulationSaving', () => {
 		expect(r.cautions).toEqual([]);
 	});
 
+	it('reports no saving, never NaN, for a line at the ambient temperature', () => {
+		const r = saving({ processTemperature: 293.15 });
+		expect(r.bare).toBe(0);
+		expect(r.saving).toBe(0);
+		expect(r.savingFraction).toBe(0);
+	});
+
 	it('wants a length or fittings, not both, not neither', () => {
 		expect(() => saving({ length: undefined })).toThrow(/either length/);
 		expect(() => saving({ fittings: { kind: 'valve', count: 1 } })).toThrow(/either length/);

@@ -109,7 +109,8 @@ export function insulationSaving(input: InsulationSavingInput): InsulationSaving
 		bare,
 		insulated,
 		saving: bare - insulated,
-		savingFraction: (bare - insulated) / bare,
+		// A line at ambient temperature loses nothing either way: report no saving, not 0/0.
+		savingFraction: bare > 0 ? (bare - insulated) / bare : 0,
 		bareSurfaceTemperature: input.processTemperature,
 		insulatedSurfaceTemperature,
 		before,
