@@ -111,7 +111,8 @@ function compare(points: ReferencePoint[]) {
 				if (want !== have) problems.push(`${describePoint(point)}: ${k} = ${have}, want ${want}`);
 				continue;
 			}
-			const deviation = Math.abs(have - want) / Math.max(Math.abs(want), FLOOR[k] ?? 0);
+			const scale = Math.max(Math.abs(want), FLOOR[k] ?? 0);
+			const deviation = have === want ? 0 : Math.abs(have - want) / scale;
 			worst[k].count++;
 			if (deviation > worst[k].deviation) {
 				worst[k] = { ...worst[k], deviation, where: `${describePoint(point)}: ${have} vs ${want}` };
