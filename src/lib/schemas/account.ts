@@ -1,13 +1,17 @@
 import { z } from 'zod';
 import type { Role } from './roles';
 
+/** An e-mail address as we store it: trimmed, lower case, at most 254 characters (RFC 5321). */
+export const emailSchema = z
+	.string({ error: 'Enter your e-mail address.' })
+	.trim()
+	.toLowerCase()
+	.min(1, 'Enter your e-mail address.')
+	.max(254, 'That e-mail address is too long.')
+	.pipe(z.email({ error: 'Enter a valid e-mail address.' }));
+
 export const signInSchema = z.object({
-	email: z
-		.string({ error: 'Enter your e-mail address.' })
-		.trim()
-		.toLowerCase()
-		.max(254, 'That e-mail address is too long.')
-		.pipe(z.email({ error: 'Enter a valid e-mail address.' })),
+	email: emailSchema,
 	password: z
 		.string({ error: 'Enter your password.' })
 		.min(1, 'Enter your password.')
@@ -15,6 +19,58 @@ export const signInSchema = z.object({
 	next: z.string().max(512).optional()
 });
 export type SignIn = z.infer<typeof signInSchema>;
+
+/**
+ * A new password: long rather than clever (length is what resists guessing; no composition
+ * rules, as NIST SP 800-63B advises), with a ceiling that keeps hashing cheap for the server.
+ */
+export const PASSWORD_MIN = 12;
+export const PASSWORD_MAX = 256;
+export const newPasswordSchema = z
+	.string({ error: 'Choose a password.' })
+	.min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters; a few words in a row work well.`)
+	.max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`)
+	.refine((p) => p.trim().length > 0, 'A password cannot be only spaces.');
+
+const confirmed = <T extends { password: string; confirm: string }>(v: T) =>
+	v.password === v.confirm;
+const confirmError = {
+	error: 'The two passwords differ. Type the same one twice.',
+	path: ['confirm']
+};
+
+export const setPasswordSchema = z
+	.object({ password: newPasswordSchema, confirm: z.string().max(PASSWORD_MAX) })
+	.refine(confirmed, confirmError);
+
+export const acceptInvitationSchema = z
+	.object({
+		name: z
+			.string({ error: 'Enter your name.' })
+			.trim()
+			.min(1, 'Enter your name.')
+			.max(160, 'Use at most 160 characters for your name.'),
+		password: newPasswordSchema,
+		confirm: z.string().max(PASSWORD_MAX)
+	})
+	.refine(confirmed, confirmError);
+
+export const changePasswordSchema = z
+	.object({
+		current: z
+			.string({ error: 'Enter your current password.' })
+			.min(1, 'Enter your current password.')
+			.max(512, 'That password is too long.'),
+		password: newPasswordSchema,
+		confirm: z.string().max(PASSWORD_MAX)
+	})
+	.refine(confirmed, confirmError)
+	.refine((v) => v.current !== v.password, {
+		error: 'Choose a password different from the current one.',
+		path: ['password']
+	});
+
+export const forgotPasswordSchema = z.object({ email: emailSchema });
 
 /** Where each role starts after signing in. */
 export const homeFor: Record<Role, string> = {
