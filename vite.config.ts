@@ -9,6 +9,8 @@ export default defineConfig({
 	plugins: [tailwindcss(), sveltekit(), SvelteKitPWA(pwaOptions), pwaIcons()],
 	server: { host: '127.0.0.1' },
 	preview: { host: '127.0.0.1' },
+	// The timing report is for bundler authors; keep build output to what a person needs.
+	build: { rolldownOptions: { checks: { bundlerTimings: false } } },
 	test: {
 		projects: [
 			{
