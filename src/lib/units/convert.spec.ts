@@ -145,6 +145,10 @@ describe('errors name the unit and the value', () => {
 		expect(() => convert(5, 'furlong' as never, 'm' as never)).toThrow(/Unknown unit "furlong"/);
 		expect(() => convert(5, 'm', 'furlong' as never)).toThrow(/Unknown unit "furlong"/);
 		expect(() => toBase('speed' as never, 5, 'm/s' as never)).toThrow(/Unknown quantity "speed"/);
+		expect(() => toBase('massFlow', 2, 'kgh' as never)).toThrow(/Unknown mass flow unit "kgh"/);
+		expect(() => convert(3, 'kg/h', 'kW' as never)).toThrow(
+			'Cannot convert 3 kg/h (mass flow) to kW (power): different quantities'
+		);
 	});
 
 	it('non-finite values', () => {

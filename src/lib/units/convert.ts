@@ -11,6 +11,11 @@ import {
 } from './quantities';
 import type { UnitDef } from './unit-def';
 
+/** A quantity as words for messages: 'massFlow' → 'mass flow'. */
+function words(quantity: Quantity): string {
+	return quantity.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`);
+}
+
 /** The definition of `unit` within `quantity`, or a UnitError naming both. */
 function defOf(quantity: Quantity, unit: string, value: number): UnitDef {
 	if (!isQuantity(quantity)) {
@@ -23,7 +28,7 @@ function defOf(quantity: Quantity, unit: string, value: number): UnitDef {
 	const table: Readonly<Record<string, UnitDef>> = quantities[quantity].units;
 	if (typeof unit !== 'string' || !Object.hasOwn(table, unit)) {
 		throw new UnitError(
-			`Unknown ${quantity} unit "${String(unit)}" for value ${describeValue(value)}; ` +
+			`Unknown ${words(quantity)} unit "${String(unit)}" for value ${describeValue(value)}; ` +
 				`expected one of ${Object.keys(table).join(', ')}`,
 			String(unit),
 			value
@@ -48,7 +53,7 @@ function baseFromDef(
 	value: number,
 	ctx: ConversionContext | undefined
 ): number {
-	requireFinite(value, def.label, quantity);
+	requireFinite(value, def.label, words(quantity));
 	let base: number;
 	if (def.gauge) {
 		const atmosphere = atmosphereOf(ctx);
@@ -56,7 +61,7 @@ function baseFromDef(
 		base = snapToZero(scaled + atmosphere, Math.abs(scaled) + atmosphere);
 		if (base < 0) {
 			throw new UnitError(
-				`${quantity} ${value} ${def.label} is below zero absolute ` +
+				`${words(quantity)} ${value} ${def.label} is below zero absolute ` +
 					`(atmospheric pressure ${atmosphere} MPa)`,
 				unit,
 				value
@@ -68,7 +73,11 @@ function baseFromDef(
 	if (quantities[quantity].absolute) {
 		base = snapToZero(base, (Math.abs(value) + (def.offset ?? 0)) * def.factor);
 		if (base < 0) {
-			throw new UnitError(`${quantity} ${value} ${def.label} is below absolute zero`, unit, value);
+			throw new UnitError(
+				`${words(quantity)} ${value} ${def.label} is below absolute zero`,
+				unit,
+				value
+			);
 		}
 	}
 	return base;
@@ -81,11 +90,12 @@ function valueFromDef(
 	base: number,
 	ctx: ConversionContext | undefined
 ): number {
-	const baseUnit = quantities[quantity].base;
-	requireFinite(base, baseUnit, quantity);
+	const baseTable: Readonly<Record<string, UnitDef>> = quantities[quantity].units;
+	const baseLabel = baseTable[quantities[quantity].base].label;
+	requireFinite(base, baseLabel, words(quantity));
 	if (quantities[quantity].absolute && base < 0) {
 		throw new UnitError(
-			`${quantity} ${base} ${baseUnit} is below absolute zero; cannot express it in ${def.label}`,
+			`${words(quantity)} ${base} ${baseLabel} is below absolute zero; cannot express it in ${def.label}`,
 			unit,
 			base
 		);
@@ -160,8 +170,8 @@ export function convert<U extends Unit>(
 	}
 	if (source.table !== target.table) {
 		throw new UnitError(
-			`Cannot convert ${describeValue(value)} ${source.def.label} (${source.quantity}) ` +
-				`to ${target.def.label} (${target.quantity}): different quantities`,
+			`Cannot convert ${describeValue(value)} ${source.def.label} (${words(source.quantity)}) ` +
+				`to ${target.def.label} (${words(target.quantity)}): different quantities`,
 			from,
 			value
 		);

@@ -62,7 +62,7 @@ describe('pressure errors', () => {
 		);
 		expect(() => toBase('pressure', -15, 'psig')).toThrow(/-15 psig is below zero absolute/);
 		expect(() => fromBase('pressure', -0.1, 'psig')).toThrow(
-			/-0.1 MPa is below absolute zero.*psig/
+			/-0.1 MPa a is below absolute zero.*psig/
 		);
 		expect(() => convert(-1, 'kPa_a', 'bar_a')).toThrow(/-1 kPa a/);
 	});
