@@ -200,6 +200,21 @@ describe('insulationInputsSchema', () => {
 		expect(
 			messages(insulationInputsSchema.safeParse({ ...insulation, item: 'surface' }))
 		).toContain('area: A flat surface needs its bare area in m²');
+		expect(
+			messages(insulationInputsSchema.safeParse({ ...insulation, item: 'surface' }))
+		).toContain('height: A flat surface needs its height in metres');
+		expect(messages(insulationInputsSchema.safeParse({ ...insulation, dn: 10 }))).toContain(
+			'dn: Pipe sizes for insulation start at DN 15 (NPS 1/2); give the outer diameter'
+		);
+		const tank = {
+			...insulation,
+			item: 'surface',
+			dn: undefined,
+			length: undefined,
+			area: 12,
+			height: 2.5
+		};
+		expect(insulationInputsSchema.safeParse(tank).success).toBe(true);
 	});
 
 	it('accepts a custom conductivity and rejects an unknown material or bad layer', () => {

@@ -185,6 +185,12 @@ export const insulationInputsSchema = z
 			.min(1, { error: 'Count must be at least 1' })
 			.max(10_000, { error: 'Count must be at most 10 000' })
 			.optional(),
+		/** Height of a flat surface, m: the run the warm air rises along. */
+		height: z
+			.number({ error: 'Height must be a number (metres)' })
+			.positive({ error: 'Height must be greater than 0 m' })
+			.max(50, { error: 'Height must be at most 50 m' })
+			.optional(),
 		/** Bare area, m² (flat surface: tank, vessel, heat-exchanger shell). */
 		area: z
 			.number({ error: 'Area must be a number (m²)' })
@@ -212,8 +218,11 @@ export const insulationInputsSchema = z
 			ctx.addIssue({ code: 'custom', path: [path], message });
 		if (ins.item === 'surface') {
 			if (ins.area === undefined) issue('area', 'A flat surface needs its bare area in m²');
+			if (ins.height === undefined) issue('height', 'A flat surface needs its height in metres');
 		} else if (ins.dn === undefined && ins.outerDiameter === undefined) {
 			issue('dn', `A ${ins.item} needs a nominal size (DN) or an outer diameter`);
+		} else if (ins.outerDiameter === undefined && ins.dn !== undefined && ins.dn < 15) {
+			issue('dn', 'Pipe sizes for insulation start at DN 15 (NPS 1/2); give the outer diameter');
 		}
 		if (ins.item === 'pipe' && ins.length === undefined) {
 			issue('length', 'A bare pipe needs its length in metres');
