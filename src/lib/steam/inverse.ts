@@ -9,7 +9,7 @@
  * compared. Region 5 has no backward equation: Newton from a linear first guess. Region 3
  * and the dome above 16.529 MPa come from region3-solve.ts.
  */
-import { P_CRIT, P_MAX_5, T_13, T_MAX, T_MAX_12, T_MIN } from './constants';
+import { P_CRIT, P_MAX_5, R, T_13, T_MAX, T_MAX_12, T_MIN } from './constants';
 import { SteamRangeError } from './errors';
 import { b23Temperature } from './b23';
 import { checkFinite, checkPressure } from './limits';
@@ -52,9 +52,14 @@ function slot(matched: Matched): number {
 }
 
 function backward(region: 1 | 2, matched: Matched, p: number, y: number): number {
-	if (region === 1)
+	if (region === 1) {
 		return matched === 'h' ? region1TemperaturePH(p, y) : region1TemperaturePS(p, y);
-	return matched === 'h' ? region2TemperaturePH(p, y) : region2TemperaturePS(p, y);
+	}
+	if (matched === 'h') return region2TemperaturePH(p, y);
+	// Eq. 25 (2a) loses its accuracy below 611 Pa (off by 1 K at 100 Pa, 1000 K at 1 Pa). The
+	// vapour there is an ideal gas, whose entropy shifts by −R ln(p/p₀) from p₀ = 611 Pa.
+	if (p < P_SAT_MIN) return region2TemperaturePS(P_SAT_MIN, y + R * Math.log(p / P_SAT_MIN));
+	return region2TemperaturePS(p, y);
 }
 
 function valueAt(region: GibbsRegion, matched: Matched, p: number, T: number): number {

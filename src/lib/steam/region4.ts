@@ -2,7 +2,7 @@
  * IF97 region 4, the saturation line: the saturation-pressure equation and its exact inverse,
  * the saturation-temperature equation (IAPWS R7-97(2012) eqs. 30 and 31, table 34).
  */
-import { inRange } from './errors';
+import { inRange, SteamRangeError } from './errors';
 import { P_CRIT, T_13, T_CRIT, T_MIN } from './constants';
 
 // Table 34.
@@ -43,6 +43,15 @@ export const P_SAT_MIN = psat(T_MIN);
 /** Saturation pressure at 623.15 K [MPa], the top of regions 1/2 along the line (≈ 16.529). */
 export const P_SAT_13 = psat(T_13);
 
+/** Checks psat(273.15 K) ≤ p ≤ 22.064 MPa, the saturation line. */
+export function checkSaturationPressure(p: number): void {
+	if (!(p >= P_SAT_MIN && p <= P_CRIT)) {
+		// The lower limit is shown rounded up, so the value printed is itself accepted.
+		const range = `0.000611213 to ${P_CRIT} MPa (the saturation line)`;
+		throw new SteamRangeError('pressure p', p, range);
+	}
+}
+
 /**
  * Saturation pressure of water [MPa] at temperature T [K], IF97 eq. 30.
  * @throws SteamRangeError unless 273.15 K ≤ T ≤ 647.096 K (the critical temperature)
@@ -57,6 +66,6 @@ export function saturationPressure(T: number): number {
  * @throws SteamRangeError unless psat(273.15 K) ≈ 0.000611213 MPa ≤ p ≤ 22.064 MPa
  */
 export function saturationTemperature(p: number): number {
-	inRange('pressure p', p, P_SAT_MIN, P_CRIT, 'MPa');
+	checkSaturationPressure(p);
 	return tsat(p);
 }

@@ -4,14 +4,14 @@
  * come from the region 1 and 2 equations at the saturation line of region 4; above, from the
  * region 3 equation (region3-solve.ts).
  */
-import { inRange, SteamRangeError } from './errors';
-import { P_CRIT, T_CRIT, T_MIN } from './constants';
+import { inRange } from './errors';
+import { T_CRIT, T_MIN } from './constants';
 import { checkDryness } from './limits';
 import { propertiesBuffer } from './properties-buffer';
 import { region1Into } from './region1';
 import { region2Into } from './region2';
 import { region3SaturatedLiquid, region3SaturatedVapour } from './region3-solve';
-import { P_SAT_13, P_SAT_MIN, psat, tsat } from './region4';
+import { checkSaturationPressure, P_SAT_13, psat, tsat } from './region4';
 import { intoBuffer, saturationState } from './state';
 import type { SteamState } from './types';
 
@@ -28,17 +28,6 @@ function onDome(p: number, T: number, x: number): SteamState {
 	if (x < 1) intoBuffer(region3SaturatedLiquid(p), liquid);
 	if (x > 0) intoBuffer(region3SaturatedVapour(p), vapour);
 	return saturationState(p, T, liquid, vapour, x, 3, 3);
-}
-
-function checkSaturationPressure(p: number): void {
-	if (!(p >= P_SAT_MIN && p <= P_CRIT)) {
-		// The lower limit is shown rounded up, so the value printed is itself accepted.
-		throw new SteamRangeError(
-			'pressure p',
-			p,
-			`0.000611213 to ${P_CRIT} MPa (the saturation line)`
-		);
-	}
 }
 
 /**
