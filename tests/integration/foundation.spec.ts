@@ -10,11 +10,14 @@ import { testDatabase } from './db';
 const { pool, db } = testDatabase();
 afterAll(() => pool.end());
 
-const rows = async <T>(query: ReturnType<typeof sql>) => (await db.execute(query))[0] as unknown as T[];
+const rows = async <T>(query: ReturnType<typeof sql>) =>
+	(await db.execute(query))[0] as unknown as T[];
 
 describe('migrations', () => {
 	it('applied every migration committed in drizzle/', async () => {
-		const journal = JSON.parse(readFileSync('drizzle/meta/_journal.json', 'utf8')) as { entries: unknown[] };
+		const journal = JSON.parse(readFileSync('drizzle/meta/_journal.json', 'utf8')) as {
+			entries: unknown[];
+		};
 		const [{ n }] = await rows<{ n: number }>(sql`SELECT COUNT(*) AS n FROM __drizzle_migrations`);
 		expect(Number(n)).toBe(journal.entries.length);
 	});
@@ -39,15 +42,26 @@ describe('migrations', () => {
 			    WHERE table_schema = DATABASE() AND column_name LIKE '%cost%'`
 		);
 		expect(columns.length).toBeGreaterThan(0);
-		for (const c of columns) expect(['bigint', 'decimal', 'longtext', 'json']).toContain(c.data_type);
+		for (const c of columns)
+			expect(['bigint', 'decimal', 'longtext', 'json']).toContain(c.data_type);
 	});
 });
 
 describe('demo seed', () => {
 	const counts = async () => {
 		const out: Record<string, number> = {};
-		for (const t of ['firms', 'client_companies', 'users', 'sites', 'headers', 'surveys', 'survey_auditors']) {
-			const [{ n }] = await rows<{ n: number }>(sql`SELECT COUNT(*) AS n FROM ${sql.identifier(t)}`);
+		for (const t of [
+			'firms',
+			'client_companies',
+			'users',
+			'sites',
+			'headers',
+			'surveys',
+			'survey_auditors'
+		]) {
+			const [{ n }] = await rows<{ n: number }>(
+				sql`SELECT COUNT(*) AS n FROM ${sql.identifier(t)}`
+			);
 			out[t] = Number(n);
 		}
 		return out;

@@ -19,7 +19,13 @@ function formatValue(value: number): string {
 }
 
 /** Throws SteamRangeError unless min <= value <= max (and finite). Returns the value. */
-export function inRange(quantity: string, value: number, min: number, max: number, unit: string): number {
+export function inRange(
+	quantity: string,
+	value: number,
+	min: number,
+	max: number,
+	unit: string
+): number {
 	if (!Number.isFinite(value) || value < min || value > max) {
 		throw new SteamRangeError(quantity, value, `${min} to ${max} ${unit}`);
 	}
