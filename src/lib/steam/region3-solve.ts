@@ -21,7 +21,7 @@
  * region 3 equation's answer there; (p, T) needs no band since the boundary is given in T.
  */
 import { b23Temperature } from './b23';
-import { P_CRIT, P_MAX, T_13, T_CRIT } from './constants';
+import { P_CRIT, P_MAX, RHO_CRIT, T_13, T_CRIT } from './constants';
 import { SteamRangeError } from './errors';
 import { ENTHALPY, ENTROPY, solveOnIsobar, type IsobarQuantity } from './region3-isobar';
 import { densityOnIsotherm, LIQUID, VAPOUR, type Branch } from './region3-isotherm';
@@ -62,7 +62,11 @@ export function region3FromPT(p: number, T: number): Properties {
 		);
 	}
 	const branch = T < T_CRIT && p < psat(T) ? VAPOUR : LIQUID;
-	const state = region3FromRhoT(densityOnIsotherm(p, T, branch), T);
+	// The critical point is (pc, Tc, ρc) by definition (IF97 eqs. 2–4). Eq. 28 gives pc at ρc only
+	// to 2e-12 relative, and its isotherm is flat to third order there, so a root search would
+	// land 0.03 % off ρc on rounding alone.
+	const rho = p === P_CRIT && T === T_CRIT ? RHO_CRIT : densityOnIsotherm(p, T, branch);
+	const state = region3FromRhoT(rho, T);
 	state.p = p;
 	return state;
 }

@@ -8,6 +8,7 @@ import { helmholtz, PHI, PHI_D, PHI_DD, PHI_DT, PHI_T, PHI_TT } from './region3-
 import type { Properties } from './types';
 
 const phi = new Float64Array(6);
+const STIFFNESS_FLOOR = 1e-12;
 
 /**
  * Properties of water in IF97 region 3 from density ρ [kg/m³] and temperature T [K].
@@ -32,7 +33,11 @@ export function region3FromRhoT(rho: number, T: number): Properties {
 export function propertiesFrom(rho: number, T: number, f: Float64Array): Properties {
 	const rt = R * T;
 	const d1 = f[PHI_D];
-	const stiffness = 2 * d1 + f[PHI_DD];
+	// (∂p/∂ρ)_T in reduced form. It vanishes at the critical point, where rounding can leave it a
+	// hair below zero and turn an unbounded cp into a huge negative one; the floor keeps cp
+	// huge and positive there. Only the critical point and unstable states inside the
+	// spinodal (never returned by the solvers) reach it.
+	const stiffness = Math.max(2 * d1 + f[PHI_DD], STIFFNESS_FLOOR);
 	const cross = d1 - f[PHI_DT];
 	const tt = f[PHI_TT];
 	return {
