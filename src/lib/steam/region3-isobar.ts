@@ -9,6 +9,8 @@
  * bracket that every evaluation narrows, with bisection when a step would leave it.
  */
 import { R, RHO_CRIT, T_CRIT } from './constants';
+import { propertiesFrom } from './region3';
+import type { Properties } from './types';
 import { helmholtz, PHI, PHI_D, PHI_DD, PHI_DT, PHI_T, PHI_TT } from './region3-helmholtz';
 
 export const ENTHALPY = 0;
@@ -65,26 +67,55 @@ function temperatureOnIsochore(
 	return T;
 }
 
+/** Offsets of the two bracket ends in the array solveOnIsobar takes: ρ, T, quantity, slope. */
+export const END_A = 0;
+export const END_B = 4;
+
 /**
- * Solves h(ρ, T) = target (or s) with p(ρ, T) = p between two states on the isobar: a light,
- * hot one (rhoA, tA) with the quantity at or above target and a dense, cold one (rhoB, tB) at
- * or below it. Writes ρ [kg/m³] to out[0] and T [K] to out[1].
+ * Stores the isobar state (ρ [kg/m³], T [K]) as a bracket end at ends[at..at+3]: ρ, T, its h or s,
+ * and the slope of that quantity along the isobar.
+ */
+export function setEnd(
+	kind: IsobarQuantity,
+	rho: number,
+	T: number,
+	ends: Float64Array,
+	at: number
+): void {
+	helmholtz(rho / RHO_CRIT, T_CRIT / T, f);
+	ends[at] = rho;
+	ends[at + 1] = T;
+	ends[at + 2] = quantity(kind, T);
+	ends[at + 3] = slopeOnIsobar(kind, rho, T);
+}
+
+/**
+ * Solves h(ρ, T) = target (or s) with p(ρ, T) = p between two bracket ends stored by setEnd:
+ * A, light and hot, with the quantity above target, and B, dense and cold, below it.
+ * @returns the region 3 properties there (p as the equation gives it)
  */
 export function solveOnIsobar(
 	p: number,
 	kind: IsobarQuantity,
 	target: number,
-	rhoA: number,
-	tA: number,
-	qA: number,
-	rhoB: number,
-	tB: number,
-	qB: number,
-	out: Float64Array
-): void {
-	// Regula falsi start: on most isobars h and s are nearly linear in ρ over a region 3 bracket.
-	let rho = rhoA + ((rhoB - rhoA) * (qA - target)) / (qA - qB);
-	if (!(rho > rhoA && rho < rhoB)) rho = 0.5 * (rhoA + rhoB);
+	ends: Float64Array
+): Properties {
+	let rhoA = ends[END_A];
+	let tA = ends[END_A + 1];
+	let rhoB = ends[END_B];
+	let tB = ends[END_B + 1];
+	const qA = ends[END_A + 2];
+	const qB = ends[END_B + 2];
+	// Start from the cubic through both ends with their slopes (inverse Hermite interpolation of
+	// ρ in the quantity); h and s bend strongly along near-critical isobars, a chord does not.
+	const t = (target - qA) / (qB - qA);
+	const span = qB - qA;
+	let rho =
+		(2 * t * t * t - 3 * t * t + 1) * rhoA +
+		(t * t * t - 2 * t * t + t) * (span / ends[END_A + 3]) +
+		(3 * t * t - 2 * t * t * t) * rhoB +
+		(t * t * t - t * t) * (span / ends[END_B + 3]);
+	if (!(rho > rhoA && rho < rhoB)) rho = rhoA + t * (rhoB - rhoA);
 	let T = tA + ((tB - tA) * (rho - rhoA)) / (rhoB - rhoA);
 	for (let it = 0; it < 200; it++) {
 		T = temperatureOnIsochore(rho, p, tB, tA, T);
@@ -106,6 +137,6 @@ export function solveOnIsobar(
 		T -= (((T / rho) * (2 * f[PHI_D] + f[PHI_DD])) / (f[PHI_D] - f[PHI_DT])) * step;
 		rho = next;
 	}
-	out[0] = rho;
-	out[1] = T;
+	// f still holds the derivatives at (ρ, T) from the last temperature search.
+	return propertiesFrom(rho, T, f);
 }

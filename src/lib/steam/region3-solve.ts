@@ -23,7 +23,15 @@
 import { b23Temperature } from './b23';
 import { P_CRIT, P_MAX, RHO_CRIT, T_13, T_CRIT } from './constants';
 import { SteamRangeError } from './errors';
-import { ENTHALPY, ENTROPY, solveOnIsobar, type IsobarQuantity } from './region3-isobar';
+import {
+	END_A,
+	END_B,
+	ENTHALPY,
+	ENTROPY,
+	setEnd,
+	solveOnIsobar,
+	type IsobarQuantity
+} from './region3-isobar';
 import { densityOnIsotherm, LIQUID, VAPOUR, type Branch } from './region3-isotherm';
 import { EDGE, saturationTemperature3 } from './region3-saturation';
 import { region3FromRhoT } from './region3';
@@ -91,7 +99,45 @@ export function region3FromPS(p: number, s: number): Properties {
 	return fromIsobar(p, ENTROPY, s);
 }
 
-const solution = new Float64Array(2);
+const ends = new Float64Array(8);
+
+function fromIsobar(p: number, kind: IsobarQuantity, target: number): Properties {
+	checkPressure(p);
+	// A is the light, hot end of the bracket, B the dense, cold end. Below the critical pressure
+	// the saturated states decide the side, and the far end is only needed on that side.
+	let hotEnd = true;
+	let coldEnd = true;
+	if (p < P_CRIT) {
+		const tSat = saturationTemperature3(p);
+		setEnd(kind, densityOnIsotherm(p, tSat, LIQUID), tSat, ends, END_A);
+		setEnd(kind, densityOnIsotherm(p, tSat, VAPOUR), tSat, ends, END_B);
+		const liquidSide = target < 0.5 * (ends[END_A + 2] + ends[END_B + 2]);
+		hotEnd = !liquidSide;
+		coldEnd = liquidSide;
+	}
+	if (hotEnd) {
+		const tHot = b23Temperature(p) + BAND;
+		setEnd(kind, densityOnIsotherm(p, tHot, VAPOUR), tHot, ends, END_A);
+	}
+	if (coldEnd) {
+		const tCold = T_13 - BAND;
+		setEnd(kind, densityOnIsotherm(p, tCold, LIQUID), tCold, ends, END_B);
+	}
+	const qA = ends[END_A + 2];
+	const qB = ends[END_B + 2];
+	let result: Properties;
+	if (target < qA && target > qB) {
+		result = solveOnIsobar(p, kind, target, ends);
+	} else if (Math.abs(target - qA) <= EDGE * Math.abs(qA)) {
+		result = region3FromRhoT(ends[END_A], ends[END_A + 1]);
+	} else if (Math.abs(target - qB) <= EDGE * Math.abs(qB)) {
+		result = region3FromRhoT(ends[END_B], ends[END_B + 1]);
+	} else {
+		throw outOfRange(p, kind, target);
+	}
+	result.p = p;
+	return result;
+}
 
 function valueOf(kind: IsobarQuantity, state: Properties): number {
 	return kind === ENTHALPY ? state.h : state.s;
@@ -99,35 +145,6 @@ function valueOf(kind: IsobarQuantity, state: Properties): number {
 
 function stateAt(p: number, T: number, branch: Branch): Properties {
 	return region3FromRhoT(densityOnIsotherm(p, T, branch), T);
-}
-
-function fromIsobar(p: number, kind: IsobarQuantity, target: number): Properties {
-	checkPressure(p);
-	// A is the light, hot end of the bracket, B the dense, cold end.
-	let a = stateAt(p, b23Temperature(p) + BAND, VAPOUR);
-	let b = stateAt(p, T_13 - BAND, LIQUID);
-	if (p < P_CRIT) {
-		const tSat = saturationTemperature3(p);
-		const liquid = stateAt(p, tSat, LIQUID);
-		const vapour = stateAt(p, tSat, VAPOUR);
-		if (target < 0.5 * (valueOf(kind, liquid) + valueOf(kind, vapour))) a = liquid;
-		else b = vapour;
-	}
-	const qA = valueOf(kind, a);
-	const qB = valueOf(kind, b);
-	let result: Properties;
-	if (target < qA && target > qB) {
-		solveOnIsobar(p, kind, target, 1 / a.v, a.T, qA, 1 / b.v, b.T, qB, solution);
-		result = region3FromRhoT(solution[0], solution[1]);
-	} else if (Math.abs(target - qA) <= EDGE * Math.abs(qA)) {
-		result = a;
-	} else if (Math.abs(target - qB) <= EDGE * Math.abs(qB)) {
-		result = b;
-	} else {
-		throw outOfRange(p, kind, target);
-	}
-	result.p = p;
-	return result;
 }
 
 /** The error for a target outside region 3 on this isobar, quoting the strict limits. */
