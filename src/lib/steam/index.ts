@@ -9,3 +9,5 @@ export { stateFromPT } from './forward';
 export { stateFromPH, stateFromPS } from './inverse';
 export { saturatedLiquid, saturatedVapour, stateFromPX, stateFromTX } from './saturation';
 export type { Phase, Properties, Region, SteamState } from './types';
+export * from './losses/index';
+export * from './heat/index';
