@@ -1,8 +1,10 @@
 import type { Handle } from '@sveltejs/kit';
+import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth/lucia';
+import { guardRoute } from '$lib/server/policy';
 
 /** Fills locals.user and locals.session from the session cookie; refreshes or clears it. */
-export const handle: Handle = async ({ event, resolve }) => {
+const session: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
 	event.locals.session = null;
 	const sessionId = event.cookies.get(lucia.sessionCookieName);
@@ -30,3 +32,37 @@ export const handle: Handle = async ({ event, resolve }) => {
 	}
 	return resolve(event);
 };
+
+/**
+ * The first line of authorization: every request to a route outside the public list needs a
+ * session, and a role allowed in that area (policy table). Loads, actions and endpoints check
+ * again themselves; this gate also covers form actions, which run before any layout load.
+ */
+const guard: Handle = async ({ event, resolve }) => {
+	guardRoute(event);
+	return resolve(event);
+};
+
+/**
+ * Headers every answer carries: no framing (clickjacking on sign-in and admin forms), no MIME
+ * sniffing, no full URLs in Referer; and nothing a signed-in person saw kept in shared caches
+ * or shown again by the Back button after signing out.
+ */
+const headers: Handle = async ({ event, resolve }) => {
+	const response = await resolve(event);
+	const set = (name: string, value: string) => {
+		if (!response.headers.has(name)) response.headers.set(name, value);
+	};
+	try {
+		set('x-frame-options', 'DENY');
+		set('x-content-type-options', 'nosniff');
+		set('referrer-policy', 'strict-origin-when-cross-origin');
+		if (event.locals.user) set('cache-control', 'private, no-store');
+	} catch {
+		// Responses built from fetch() have immutable headers; they pass through unchanged.
+	}
+	return response;
+};
+
+// headers first so it wraps everything after it; guard last, once the session is known.
+export const handle = sequence(headers, session, guard);
