@@ -50,6 +50,20 @@ export async function parseForm<S extends z.ZodType>(
 	const errors = fieldErrors(parsed.error.issues);
 	return {
 		ok: false as const,
-		failure: fail(400, { values, errors, error: Object.values(errors)[0] })
+		failure: formProblem(400, Object.values(errors)[0] ?? 'Check the form.', { values, errors })
 	};
+}
+
+/** A refusal with one message (and optionally field errors), shaped like parseForm's failures. */
+export function formProblem(
+	status: number,
+	error: string,
+	extra: { errors?: Record<string, string>; values?: Record<string, string>; dead?: boolean } = {}
+) {
+	return fail(status, {
+		values: extra.values ?? ({} as Record<string, string>),
+		errors: extra.errors ?? ({} as Record<string, string>),
+		error,
+		dead: extra.dead ?? false
+	});
 }
