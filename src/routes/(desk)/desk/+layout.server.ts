@@ -1,10 +1,14 @@
-import { error, redirect } from '@sveltejs/kit';
+import { mailboxAvailable } from '$lib/server/mail/dev-mailbox';
+import { requireRole, roleCan } from '$lib/server/policy';
 import type { LayoutServerLoad } from './$types';
 
-export const load: LayoutServerLoad = ({ locals, url }) => {
-	if (!locals.user) redirect(303, `/signin?next=${encodeURIComponent(url.pathname)}`);
-	if (locals.user.role !== 'admin' && locals.user.role !== 'consultant') {
-		error(403, 'Desk is for consultants and firm admins.');
-	}
-	return { user: { name: locals.user.name, role: locals.user.role } };
+export const load: LayoutServerLoad = (event) => {
+	const user = requireRole(event, 'desk.open');
+	return {
+		user: { name: user.name, role: user.role },
+		nav: {
+			people: roleCan(user.role, 'people.view'),
+			mailbox: roleCan(user.role, 'mailbox.read') && mailboxAvailable()
+		}
+	};
 };

@@ -1,6 +1,8 @@
+import { requireRole } from '$lib/server/policy';
 import { firmSurveys } from '$lib/server/surveys';
 import type { PageServerLoad } from './$types';
 
-export const load: PageServerLoad = async ({ locals }) => {
-	return { surveys: await firmSurveys(locals.user!.firmId) };
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, 'desk.open');
+	return { surveys: await firmSurveys(user.firmId) };
 };
