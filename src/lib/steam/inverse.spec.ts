@@ -34,23 +34,24 @@ function* grid(nP: number, nT: number): Generator<[number, number]> {
 	}
 }
 
+// About 3,500 states each, with a dozen assertions per state: allow a minute on a busy machine.
 describe('round trips over the whole range', () => {
 	it('(p, T) → h → (p, h) → T agrees to 1e-9 in every region', () => {
 		const regions = new Set<number>();
-		for (const [p, T] of grid(60, 90)) {
+		for (const [p, T] of grid(48, 72)) {
 			const a = stateFromPT(p, T);
 			regions.add(a.region);
 			expectSameState(a, stateFromPH(p, a.h), 1e-9);
 		}
 		expect([...regions].sort()).toEqual([1, 2, 3, 5]);
-	});
+	}, 60_000);
 
 	it('(p, T) → s → (p, s) → T agrees to 1e-9 in every region', () => {
-		for (const [p, T] of grid(60, 90)) {
+		for (const [p, T] of grid(48, 72)) {
 			const a = stateFromPT(p, T);
 			expectSameState(a, stateFromPS(p, a.s), 1e-9);
 		}
-	});
+	}, 60_000);
 
 	it('round trips hold close to every region boundary', () => {
 		const points: [number, number][] = [

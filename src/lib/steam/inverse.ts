@@ -26,9 +26,13 @@ import {
 	region3SaturatedVapour
 } from './region3-solve';
 import { P_SAT_13, P_SAT_MIN, tsat } from './region4';
-import { region5Into } from './region5';
 import { intoBuffer, region3State, saturationState, singlePhaseState } from './state';
-import { solveTemperature, type GibbsRegion, type Matched } from './temperature-solver';
+import {
+	gibbsHsCpInto,
+	solveTemperature,
+	type GibbsRegion,
+	type Matched
+} from './temperature-solver';
 import type { SteamState } from './types';
 
 const state = propertiesBuffer();
@@ -63,9 +67,7 @@ function backward(region: 1 | 2, matched: Matched, p: number, y: number): number
 }
 
 function valueAt(region: GibbsRegion, matched: Matched, p: number, T: number): number {
-	if (region === 1) region1Into(p, T, state);
-	else if (region === 2) region2Into(p, T, state);
-	else region5Into(p, T, state);
+	gibbsHsCpInto(region, p, T, state);
 	return state[slot(matched)];
 }
 

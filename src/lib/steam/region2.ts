@@ -86,6 +86,32 @@ export function region2Into(p: number, T: number, out: Float64Array): void {
 	idealPlusResidualInto(p, T, pi, tau, g0, gr, out);
 }
 
+/**
+ * h, s and cp from the ideal and residual sums of evaluateY, into slots H, S, CP (the parts of
+ * idealPlusResidualInto a temperature iteration needs).
+ */
+export function idealPlusResidualHsCpInto(
+	T: number,
+	pi: number,
+	tau: number,
+	g0: Float64Array,
+	gr: Float64Array,
+	out: Float64Array
+): void {
+	const gt = g0[F_Y] + gr[F_Y];
+	out[H] = R * T * tau * gt;
+	out[S] = R * (tau * gt - (Math.log(pi) + g0[F] + gr[F]));
+	out[CP] = -R * tau * tau * (g0[F_YY] + gr[F_YY]);
+}
+
+/** Only h, s and cp of region 2 at p [MPa], T [K] into slots H, S, CP. */
+export function region2HsCpInto(p: number, T: number, out: Float64Array): void {
+	const tau = 540 / T;
+	ideal.evaluateY(1, tau, g0);
+	residual.evaluateY(p, tau - 0.5, gr);
+	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
+}
+
 const buffer = propertiesBuffer();
 
 /** Region 2 properties at p [MPa], T [K] as an object (base units, see Properties). */

@@ -4,7 +4,7 @@
  */
 import { propertiesBuffer, toProperties } from './properties-buffer';
 import { GibbsSeries } from './power-series';
-import { idealPlusResidualInto } from './region2';
+import { idealPlusResidualHsCpInto, idealPlusResidualInto } from './region2';
 import type { Properties } from './types';
 
 // Table 37, ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ.
@@ -37,6 +37,14 @@ export function region5Into(p: number, T: number, out: Float64Array): void {
 	ideal.evaluate(1, tau, g0);
 	residual.evaluate(p, tau, gr);
 	idealPlusResidualInto(p, T, p, tau, g0, gr, out);
+}
+
+/** Only h, s and cp of region 5 at p [MPa], T [K] into slots H, S, CP. */
+export function region5HsCpInto(p: number, T: number, out: Float64Array): void {
+	const tau = 1000 / T;
+	ideal.evaluateY(1, tau, g0);
+	residual.evaluateY(p, tau, gr);
+	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
 }
 
 const buffer = propertiesBuffer();

@@ -88,6 +88,11 @@ export function saturationState(
 		const g = vapour;
 		return makeState(p, T, g[V], g[H], g[U], g[S], g[CP], g[CV], g[W], 1, vapourRegion, 'vapour');
 	}
-	const mix = (k: number) => liquid[k] + x * (vapour[k] - liquid[k]);
-	return makeState(p, T, mix(V), mix(H), mix(U), mix(S), null, null, null, x, 4, 'two-phase');
+	const l = liquid;
+	const g = vapour;
+	const v = l[V] + x * (g[V] - l[V]);
+	const h = l[H] + x * (g[H] - l[H]);
+	const u = l[U] + x * (g[U] - l[U]);
+	const s = l[S] + x * (g[S] - l[S]);
+	return makeState(p, T, v, h, u, s, null, null, null, x, 4, 'two-phase');
 }

@@ -2,11 +2,13 @@
  * Newton iteration for the temperature at which a region's forward equation gives a wanted
  * enthalpy or entropy at fixed pressure. Both rise with temperature (cp > 0), which makes a
  * bracket from the signs of the residuals, and bisection covers any step that leaves it.
+ * Iterations evaluate only h, s and cp; the full set of properties is computed once, at the
+ * answer.
  */
 import { CP, H, S } from './properties-buffer';
-import { region1Into } from './region1';
-import { region2Into } from './region2';
-import { region5Into } from './region5';
+import { region1HsCpInto, region1Into } from './region1';
+import { region2HsCpInto, region2Into } from './region2';
+import { region5HsCpInto, region5Into } from './region5';
 
 /** What the solver matches: enthalpy h [kJ/kg] or entropy s [kJ/(kg K)]. */
 export type Matched = 'h' | 's';
@@ -19,17 +21,31 @@ export type GibbsRegion = 1 | 2 | 5;
  * the round trips need, yet above the rounding noise of the equations (about 1e-15).
  */
 const TOLERANCE = 1e-12;
+/**
+ * A step below this fraction of T is taken without another check: Newton's error after it is
+ * about (c′/2c)·ΔT², with c′/c under 0.1 per kelvin anywhere in regions 1, 2 and 5, so below
+ * 1e-13 of T.
+ */
+const LAST_STEP = 1e-7;
 const MAX_ITERATIONS = 100;
 
+/** All properties of a region at p [MPa], T [K] into a buffer (slots V … W). */
 export function gibbsInto(region: GibbsRegion, p: number, T: number, out: Float64Array): void {
 	if (region === 1) region1Into(p, T, out);
 	else if (region === 2) region2Into(p, T, out);
 	else region5Into(p, T, out);
 }
 
+/** Only h, s and cp of a region at p [MPa], T [K] into slots H, S, CP. */
+export function gibbsHsCpInto(region: GibbsRegion, p: number, T: number, out: Float64Array): void {
+	if (region === 1) region1HsCpInto(p, T, out);
+	else if (region === 2) region2HsCpInto(p, T, out);
+	else region5HsCpInto(p, T, out);
+}
+
 /**
  * Temperature [K] in [lo, hi] where the region's h (or s) at p [MPa] equals target, starting
- * from guess T0 [K]; out then holds the properties there. Returns NaN when the solution lies
+ * from guess T0 [K]; out then holds all properties there. Returns NaN when the solution lies
  * outside [lo, hi], so callers can try a region first and fall back to its boundaries.
  */
 export function solveTemperature(
@@ -46,23 +62,27 @@ export function solveTemperature(
 	let b = hi;
 	let T = T0 >= lo && T0 <= hi ? T0 : T0 < lo ? lo : T0 > hi ? hi : 0.5 * (lo + hi);
 	for (let i = 0; i < MAX_ITERATIONS; i++) {
-		gibbsInto(region, p, T, out);
+		gibbsHsCpInto(region, p, T, out);
 		const f = matched === 'h' ? out[H] - target : out[S] - target;
 		const slope = matched === 'h' ? out[CP] : out[CP] / T;
 		if (f < 0) a = T;
 		else b = T;
 		const dT = -f / slope;
-		if (Math.abs(dT) <= TOLERANCE * T) return T;
+		if (Math.abs(dT) <= TOLERANCE * T) break;
 		// At a limit and still pointing out of it: the solution is not in [lo, hi].
 		if ((T <= lo && dT < 0) || (T >= hi && dT > 0)) return NaN;
-		if (b - a <= TOLERANCE * T) return T;
+		if (b - a <= TOLERANCE * T) break;
 		let next = T + dT;
-		if (!(next > a && next < b)) {
-			// Try the limit itself once before bisecting, so a solution outside is found fast.
-			if (next <= a) next = a === lo ? lo : 0.5 * (a + b);
-			else next = b === hi ? hi : 0.5 * (a + b);
+		if (next > a && next < b) {
+			T = next;
+			if (Math.abs(dT) <= LAST_STEP * T) break;
+			continue;
 		}
+		// Try the limit itself once before bisecting, so a solution outside is found fast.
+		if (next <= a) next = a === lo ? lo : 0.5 * (a + b);
+		else next = b === hi ? hi : 0.5 * (a + b);
 		T = next;
 	}
-	return NaN;
+	gibbsInto(region, p, T, out);
+	return T;
 }
