@@ -6,19 +6,21 @@
  * equation to about 1e-13 relative, with no backward-equation error to hide.
  *  - (p, T): the isotherm's pressure is a polynomial in density; the root is bracketed on the
  *    liquid-like or vapour-like branch (chosen by p against the saturation pressure eq. 30, with
- *    the van der Waals loop's spinodals as bracket ends) and found by safeguarded Newton
- *    (region3-isotherm.ts).
+ *    the critical density or the van der Waals loop's spinodals as bracket ends) and found by
+ *    safeguarded Newton (region3-isotherm.ts).
  *  - (p, h), (p, s): Newton in density along the isobar, bracketed between states found by (p, T)
  *    at the region's temperature limits and, below the critical pressure, the saturated states,
- *    which also decide the branch (region3-isobar.ts).
+ *    which also decide the branch; the first guess is a cubic through the bracket ends
+ *    (region3-isobar.ts).
  *  - Saturation: T from eq. 31, both densities by (p, T) on their branches (region3-saturation.ts).
  *
  * Range: 623.15 K ≤ T ≤ T_B23(p) and p_B23(T) ≤ p ≤ 100 MPa. The region 1 and region 2 equations
- * disagree with region 3's at the shared boundaries by up to about 0.1 kJ/kg in h (measured
- * against python3-iapws), so a dispatcher that places (p, h) or (p, s) by the neighbouring
- * region's boundary value can hand region 3 a state just beyond its own boundary value. (p, h) and
- * (p, s) therefore accept states up to BAND kelvin outside the temperature limits and return the
- * region 3 equation's answer there; (p, T) needs no band since the boundary is given in T.
+ * disagree with region 3's at the shared boundaries by up to about 0.1 kJ/kg in h, which is
+ * 0.02 K in temperature (measured against python3-iapws), so a dispatcher that places (p, h) or
+ * (p, s) by the neighbouring region's boundary value can hand region 3 a state just beyond its
+ * own boundary value. (p, h) and (p, s) therefore accept states up to BAND kelvin outside the
+ * temperature limits and return the region 3 equation's answer there; (p, T) needs no band since
+ * the boundary is given in T. All limits carry a relative slack of EDGE (1e-9) for rounding.
  */
 import { b23Temperature } from './b23';
 import { P_CRIT, P_MAX, RHO_CRIT, T_13, T_CRIT } from './constants';
