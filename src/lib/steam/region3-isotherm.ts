@@ -22,7 +22,7 @@ export const LIQUID = 0;
 export const VAPOUR = 1;
 export type Branch = typeof LIQUID | typeof VAPOUR;
 
-// Search interval in δ: 50 to 800 kg/m³. Across region 3 (and 1 K beyond its temperature
+// Search interval in δ: 50 to 800 kg/m³. Across region 3 (and a little beyond its temperature
 // limits) π rises with δ at both ends and spans 16.5 to 100 MPa with room to spare; past about
 // 850 kg/m³ the polynomial turns down, a mathematical artefact, not water.
 const DELTA_LO = 50 / RHO_CRIT;
@@ -69,8 +69,10 @@ function d2pi(delta: number): number {
 }
 
 /**
- * Root of f(δ) = target in [lo, hi], f monotonic there (rising or falling, as told) and the
- * root bracketed; safeguarded Newton from x0 with bisection, as in the usual "rtsafe" scheme.
+ * Root of f(δ) = target in [lo, hi], which must hold exactly one crossing: f below target left
+ * of it and above right of it when `rising` (the reverse otherwise), though f need not be
+ * monotonic on either side. Safeguarded Newton from x0 with bisection, as in the usual "rtsafe"
+ * scheme; every evaluation narrows the bracket by its sign alone.
  * Stops once |f − target| ≤ fTol (near the critical point f is so flat that rounding noise,
  * not the bracket, limits δ) or the Newton step falls below 1e-14 δ.
  */
