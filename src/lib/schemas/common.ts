@@ -27,6 +27,11 @@ export const currencySchema = z
 	.string({ error: 'Choose a currency' })
 	.regex(/^[A-Z]{3}$/, { error: 'Currency must be a three-letter ISO 4217 code, e.g. USD or EUR' });
 
+/** The error option for an enum: names the allowed values. */
+export function oneOf(label: string, values: readonly string[]) {
+	return { error: `${label} must be one of: ${values.join(', ')}` };
+}
+
 export const uuidSchema = z.uuid({ error: 'Must be a UUID' });
 
 /** Absolute temperature in K within [min, max] (default −100 °C to 2000 °C, the IF97 ceiling). */
