@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { b23Pressure } from './b23';
 import { RHO_CRIT, T_CRIT } from './constants';
 import { region3FromRhoT } from './region3';
 import { densityOnIsotherm, LIQUID, VAPOUR } from './region3-isotherm';
@@ -78,5 +79,28 @@ describe('densityOnIsotherm at and above the critical temperature', () => {
 		// The isotherm is flat to third order there: |p − pc| ~ (ρ − ρc)³, so a pressure exact to
 		// 1e-15 fixes ρ only to about 1e-5 relative.
 		expect(rel(densityOnIsotherm(22.064, T_CRIT, LIQUID), RHO_CRIT)).toBeLessThan(1e-3);
+	});
+});
+
+describe('the search interval the solver relies on', () => {
+	it('holds on every region 3 isotherm: 50 and 800 kg/m³ bracket its pressures, one loop at most', () => {
+		for (let T = 623.05; T <= 863.25; T += 0.5) {
+			const p = (rho: number) => region3FromRhoT(rho, T).p;
+			// The lowest pressure region 3 (with its 0.1 K band) reaches on this isotherm.
+			const pMin = T <= 623.25 ? 16.5 : b23Pressure(T - 0.1);
+			expect(p(50), `T = ${T}`).toBeLessThan(pMin);
+			expect(p(800), `T = ${T}`).toBeGreaterThan(100);
+			// dp/dρ changes sign at most twice (the two spinodals), and only below Tc.
+			let changes = 0;
+			let previous = p(50.5) - p(50);
+			expect(previous).toBeGreaterThan(0);
+			for (let rho = 52; rho <= 800; rho += 2) {
+				const slope = p(rho + 0.5) - p(rho);
+				if (slope > 0 !== previous > 0) changes++;
+				previous = slope;
+			}
+			expect(previous).toBeGreaterThan(0);
+			expect(changes, `T = ${T}`).toBeLessThanOrEqual(T < T_CRIT ? 2 : 0);
+		}
 	});
 });
