@@ -135,13 +135,10 @@ function si(n: number): string {
 }
 
 const verdict = (ok: boolean) => (ok ? 'pass' : 'FAIL');
-const row = (name: string, ...rest: string[]) =>
-	name.padEnd(24) +
-	rest
-		.slice(0, 3)
-		.map((c) => c.padStart(12))
-		.join('') +
-	`  ${rest[3]}`;
+const row = (name: string, ...rest: string[]) => {
+	const numbers = rest.slice(0, 3).map((c) => c.padStart(12));
+	return `${name.padEnd(24)}${numbers.join('')}  ${rest[3]}`.trimEnd();
+};
 
 /** The side-by-side table: evaluations per CPU second, the ratio, and the issue's targets. */
 function table(ours: { cpu: Rates; wall: Rates }, python: PythonRates | null): string[] {
