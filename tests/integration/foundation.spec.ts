@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
-import { getTableName, isTable, sql } from 'drizzle-orm';
+import { eq, getTableName, isTable, sql } from 'drizzle-orm';
 import { afterAll, describe, expect, it } from 'vitest';
 import * as schema from '../../src/lib/server/db/schema';
 import { checkDatabase } from '../../src/lib/server/health';
-import { demoUsers } from '../../src/lib/server/seed/demo';
+import { demoSites, demoUsers } from '../../src/lib/server/seed/demo';
 import { seedDemo } from '../../src/lib/server/seed/index';
 import { testDatabase } from './db';
 
@@ -108,5 +108,36 @@ describe('health check', () => {
 		await dead.pool.end();
 		expect(health.up).toBe(false);
 		expect(health.error).toMatch(/database unavailable/);
+	});
+});
+
+describe('demo findings', () => {
+	it('carry results computed by the shared engine from their own inputs', async () => {
+		const { evaluateFinding } = await import('../../src/lib/steam/index');
+		const { findingSchema } = await import('../../src/lib/schemas/finding');
+		const { costBasisSchema } = await import('../../src/lib/schemas/site');
+		const { demoFindings } = await import('../../src/lib/server/seed/findings');
+		const stored = await db.select().from(schema.findings);
+		const [site] = await db.select().from(schema.sites).where(eq(schema.sites.id, demoSites[0].id));
+		const headers = await db
+			.select()
+			.from(schema.headers)
+			.where(eq(schema.headers.siteId, site.id));
+		const costBasis = costBasisSchema.parse(site.costBasis);
+		for (const raw of demoFindings) {
+			const row = stored.find((f) => f.id === raw.id);
+			expect(row, raw.id).toBeDefined();
+			const fresh = evaluateFinding(findingSchema.parse(raw), {
+				costBasis,
+				headers: headers.map((h) => ({ id: h.id, name: h.name, pressure: h.pressure }))
+			});
+			const results = row!.results as { cost: { minor: number }; steamLoss: number | null };
+			expect(results.cost.minor).toBe(fresh.cost.minor);
+			expect(results.steamLoss).toBe(fresh.steamLoss);
+		}
+		// At least one failed trap prices to a real loss; a failed-closed one to none.
+		const losses = stored.map((f) => (f.results as { steamLoss: number | null }).steamLoss ?? 0);
+		expect(Math.max(...losses)).toBeGreaterThan(1);
+		expect(losses).toContain(0);
 	});
 });

@@ -3,6 +3,7 @@ import type { MySql2Database } from 'drizzle-orm/mysql2';
 import { hashPassword } from '../auth/password';
 import * as schema from '../db/schema';
 import { demoClients, demoFirms, demoPassword, demoSites, demoSurveys, demoUsers } from './demo';
+import { seedDemoFindings } from './seed-findings';
 
 /**
  * Writes the demo scenario. Idempotent: rows have fixed ids and existing rows are left as
@@ -47,4 +48,5 @@ export async function seedDemo(db: MySql2Database<typeof schema>): Promise<void>
 				.onDuplicateKeyUpdate({ set: { userId: sql`user_id` } });
 		}
 	}
+	await seedDemoFindings(db);
 }
