@@ -1,0 +1,154 @@
+/**
+ * The expected answers of every route, for every role and for nobody, against the person's own
+ * firm ("own") and the other firm ("other"). authorization-matrix.e2e.ts reads the route tree
+ * and fails for any route or form action missing here, so a new route is decided on, not
+ * forgotten.
+ *
+ * Adding a route: add its route id (groups included, as in src/routes) with one entry per
+ * operation ("GET", "POST" for a default action or endpoint, "POST ?/name" for a named action,
+ * "PUT"… for endpoints). `request` builds the concrete request for a tenant's fixtures
+ * (support/tenants.ts); `expect` gives the status per role, either one value or { own, other }.
+ * 'signin' means a redirect to the sign-in page. Requests that change data must be harmless to
+ * repeat (they run once per role and tenant).
+ */
+import type { Role } from '../../src/lib/schemas/roles';
+import type { Tenant } from './support/tenants';
+
+export type Who = 'anonymous' | Role;
+export type Outcome = 200 | 303 | 400 | 401 | 403 | 404 | 405 | 409 | 410 | 'signin';
+export type Expectation = Outcome | { own: Outcome; other: Outcome };
+
+export interface Case {
+	request?: (t: Tenant) => { path?: string; form?: Record<string, string> };
+	expect: Record<Who, Expectation>;
+	/** The request ends the session it is made with (sign-out): the runner uses a spare one. */
+	endsSessions?: boolean;
+}
+
+const every = (o: Expectation): Record<Who, Expectation> => ({
+	anonymous: o,
+	admin: o,
+	consultant: o,
+	auditor: o,
+	client: o
+});
+const signedIn = (o: Expectation, anonymous: Outcome): Record<Who, Expectation> => ({
+	...every(o),
+	anonymous
+});
+const deskPage: Record<Who, Expectation> = {
+	anonymous: 'signin',
+	admin: 200,
+	consultant: 200,
+	auditor: 403,
+	client: 403
+};
+/** A Desk action on one of the firm's people or invitations: 404 across tenants. */
+const deskAction = (admin: Expectation, consultant: Expectation): Record<Who, Expectation> => ({
+	anonymous: 401,
+	admin,
+	consultant,
+	auditor: 403,
+	client: 403
+});
+const mine = { own: 200, other: 404 } as const;
+
+/** 43 characters of the token alphabet that no link ever carried. */
+const unknownToken = 'Zz0_'.repeat(10) + 'Zz0';
+const newPassword = { password: 'a perfectly long password', confirm: 'a perfectly long password' };
+let inviteCounter = 0;
+
+export const matrix: Record<string, Record<string, Case>> = {
+	'/': { GET: { expect: every(200) } },
+	'/offline': { GET: { expect: every(200) } },
+	'/(walk)/walk': { GET: { expect: every(200) } },
+	'/api/health': { GET: { expect: every(200) } },
+
+	'/signin': {
+		GET: { expect: signedIn(303, 200) },
+		// An empty form: refused before any password check, so it costs no attempt. A person
+		// already signed in is sent home by the page's load, which runs after the action.
+		POST: { request: () => ({ form: { email: '', password: '' } }), expect: signedIn(303, 400) }
+	},
+	'/signout': { POST: { expect: every(303), endsSessions: true } },
+	'/password/forgot': {
+		GET: { expect: every(200) },
+		POST: { request: () => ({ form: { email: 'not an address' } }), expect: every(400) }
+	},
+	'/password/reset/[token]': {
+		GET: { request: () => ({ path: `/password/reset/${unknownToken}` }), expect: every(404) },
+		POST: {
+			request: () => ({ path: `/password/reset/${unknownToken}`, form: newPassword }),
+			expect: every(404)
+		}
+	},
+	'/invitation/[token]': {
+		GET: { request: () => ({ path: `/invitation/${unknownToken}` }), expect: every(404) },
+		POST: {
+			request: () => ({
+				path: `/invitation/${unknownToken}`,
+				form: { name: 'Someone', ...newPassword }
+			}),
+			expect: every(404)
+		}
+	},
+	'/account': {
+		GET: { expect: signedIn(200, 'signin') },
+		// Fails validation (new password too short) before the current password is checked.
+		'POST ?/changePassword': {
+			request: () => ({ form: { current: 'x', password: 'short', confirm: 'short' } }),
+			expect: signedIn(400, 401)
+		},
+		'POST ?/signOutEverywhere': { expect: signedIn(303, 401), endsSessions: true }
+	},
+
+	'/(desk)/desk': { GET: { expect: deskPage } },
+	'/(desk)/desk/people': {
+		GET: { expect: deskPage },
+		// A client user for one of the tenant's client companies: unknown in the other firm.
+		'POST ?/invite': {
+			request: (t) => ({
+				form: {
+					email: `matrix.invite.${Date.now()}.${inviteCounter++}@example.test`,
+					role: 'client',
+					clientCompanyId: t.clientId
+				}
+			}),
+			expect: deskAction({ own: 200, other: 400 }, { own: 200, other: 400 })
+		},
+		'POST ?/revoke': {
+			request: (t) => ({ form: { invitationId: t.invitationId } }),
+			expect: deskAction(mine, mine)
+		},
+		'POST ?/changeRole': {
+			request: (t) => ({ form: { userId: t.targetUserId, role: 'auditor' } }),
+			expect: deskAction(mine, 403)
+		},
+		'POST ?/disable': {
+			request: (t) => ({ form: { userId: t.targetUserId } }),
+			expect: deskAction(mine, 403)
+		},
+		'POST ?/enable': {
+			request: (t) => ({ form: { userId: t.targetUserId } }),
+			expect: deskAction(mine, 403)
+		}
+	},
+	'/(desk)/desk/mailbox': {
+		GET: { expect: { ...deskPage, consultant: 403 } }
+	},
+	'/(desk)/desk/mailbox/[id]': {
+		GET: {
+			request: (t) => ({ path: `/desk/mailbox/${t.messageId}` }),
+			expect: { ...deskPage, admin: mine, consultant: 403 }
+		}
+	},
+
+	'/(ladder)/ladder': {
+		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }
+	}
+};
+
+/** The URL path of a route id with no parameters: groups dropped. */
+export function plainPath(routeId: string): string {
+	return routeId.replace(/\/\([^)]+\)/g, '') || '/';
+}

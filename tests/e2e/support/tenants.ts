@@ -1,0 +1,159 @@
+/**
+ * Two tenants to test authorization against: the two demo firms, each with extra fixtures the
+ * matrix needs (a second client company with a published survey, a published survey for the
+ * demo client, a person to change, an open invitation, a message in the mailbox). Ids are
+ * fixed so a rerun resets the same rows; names are invented test data.
+ */
+import { randomBytes } from 'node:crypto';
+import MailComposer from 'nodemailer/lib/mail-composer';
+import { FIRM_HEADER, saveMessage } from '../../../src/lib/server/mail/mailbox';
+import {
+	demoClients,
+	demoFirms,
+	demoSites,
+	demoSurveys,
+	demoUsers,
+	type DemoUser
+} from '../../../src/lib/server/seed/demo';
+import type { Db } from './db';
+import { e2eMail } from './servers';
+
+export interface Tenant {
+	index: 0 | 1;
+	firmId: string;
+	firmName: string;
+	users: DemoUser[];
+	clientId: string;
+	otherClientId: string;
+	targetUserId: string;
+	invitationId: string;
+	messageId: string;
+	/** Text that may appear only in answers to this firm's people. */
+	markers: string[];
+	/** Text of this firm a client user of the demo client must not see either. */
+	hiddenFromClient: string[];
+	/** Text of this firm its auditor (assigned to the demo survey only) must not see. */
+	hiddenFromAuditor: string[];
+}
+
+const hex = (firm: number, kind: number) =>
+	`a7a7${String(kind).padStart(4, '0')}-0000-4000-8000-${String(firm + 1).padStart(12, '0')}`;
+
+export async function prepareTenants(db: Db): Promise<[Tenant, Tenant]> {
+	const out: Tenant[] = [];
+	for (const index of [0, 1] as const) out.push(await prepare(db, index));
+	return out as [Tenant, Tenant];
+}
+
+async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
+	const firm = demoFirms[index];
+	const client = demoClients[index];
+	const site = demoSites[index];
+	const survey = demoSurveys[index];
+	const tag = index === 0 ? 'Ashgrove' : 'Brightwater';
+	const ids = {
+		otherClient: hex(index, 1),
+		otherSite: hex(index, 2),
+		otherSurvey: hex(index, 3),
+		clientSurvey: hex(index, 4),
+		target: hex(index, 5),
+		invitation: hex(index, 6)
+	};
+	const names = {
+		otherClient: `${tag} Matrix Brewery`,
+		otherSite: `${tag} Matrix Brewhouse`,
+		otherSurvey: `${tag} brewhouse survey (published)`,
+		clientSurvey: `${tag} creamery follow-up (published)`,
+		target: `${tag} Matrix Target`,
+		targetEmail: `matrix.target@${tag.toLowerCase()}.example`,
+		invitationEmail: `matrix.invitee@${tag.toLowerCase()}.example`
+	};
+
+	await db.query(
+		`INSERT INTO client_companies (id, firm_id, name) VALUES (?, ?, ?)
+		 ON DUPLICATE KEY UPDATE name = VALUES(name)`,
+		[ids.otherClient, firm.id, names.otherClient]
+	);
+	await db.query(
+		`INSERT INTO sites (id, firm_id, client_company_id, name) VALUES (?, ?, ?, ?)
+		 ON DUPLICATE KEY UPDATE name = VALUES(name)`,
+		[ids.otherSite, firm.id, ids.otherClient, names.otherSite]
+	);
+	for (const [id, siteId, name] of [
+		[ids.otherSurvey, ids.otherSite, names.otherSurvey],
+		[ids.clientSurvey, site.id, names.clientSurvey]
+	]) {
+		await db.query(
+			`INSERT INTO surveys (id, firm_id, site_id, name, status, published_at)
+			 VALUES (?, ?, ?, ?, 'published', NOW(3))
+			 ON DUPLICATE KEY UPDATE name = VALUES(name), published_at = NOW(3)`,
+			[id, firm.id, siteId, name]
+		);
+	}
+	await db.query(
+		`INSERT INTO users (id, firm_id, email, name, role) VALUES (?, ?, ?, ?, 'auditor')
+		 ON DUPLICATE KEY UPDATE role = 'auditor', client_company_id = NULL, disabled_at = NULL`,
+		[ids.target, firm.id, names.targetEmail, names.target]
+	);
+	await db.query(
+		`INSERT INTO tokens (id, firm_id, purpose, token_hash, email, role, expires_at)
+		 VALUES (?, ?, 'invite', ?, ?, 'auditor', NOW(3) + INTERVAL 1 DAY)
+		 ON DUPLICATE KEY UPDATE revoked = 0, used_at = NULL, expires_at = NOW(3) + INTERVAL 1 DAY`,
+		[ids.invitation, firm.id, randomBytes(32).toString('hex'), names.invitationEmail]
+	);
+	const raw: Buffer = await new MailComposer({
+		from: 'Steamwisp <no-reply@steamwisp.invalid>',
+		to: names.invitationEmail,
+		subject: `${tag} matrix message`,
+		text: `A message for ${firm.name} only.`,
+		headers: { [FIRM_HEADER]: firm.id }
+	})
+		.compile()
+		.build();
+	const message = await saveMessage(e2eMail.STEAMWISP_MAILBOX_DIR, raw, {
+		mailFrom: 'no-reply@steamwisp.invalid',
+		rcptTo: [names.invitationEmail]
+	});
+
+	const users = demoUsers.filter((u) => u.firmId === firm.id);
+	const hiddenFromAuditor = [
+		names.otherClient,
+		names.otherSite,
+		names.otherSurvey,
+		ids.otherSurvey
+	];
+	return {
+		index,
+		firmId: firm.id,
+		firmName: firm.name,
+		users,
+		clientId: client.id,
+		otherClientId: ids.otherClient,
+		targetUserId: ids.target,
+		invitationId: ids.invitation,
+		messageId: message.id,
+		markers: [
+			firm.id,
+			firm.name,
+			client.name,
+			client.id,
+			site.name,
+			site.id,
+			survey.name,
+			survey.id,
+			...users.flatMap((u) => [u.email, u.name, u.id]),
+			...Object.values(ids),
+			...Object.values(names),
+			`${tag} matrix message`,
+			message.id
+		],
+		hiddenFromClient: [
+			...hiddenFromAuditor,
+			ids.otherClient,
+			// The demo survey is still in the field: not published, so not the client's to see.
+			survey.name,
+			survey.id
+		],
+		hiddenFromAuditor
+	};
+}
