@@ -1,11 +1,10 @@
 import { defineConfig } from '@playwright/test';
+import { appEnv, appOrigin as origin, appPort as port, e2eMail } from './tests/e2e/support/servers';
 
 /**
  * End-to-end tests against the built app (`node build`) in Debian's Chromium — never a
  * downloaded browser. `npm test` builds the app and points it at the fresh test database.
  */
-const port = Number(process.env.STEAMWISP_E2E_PORT ?? 4181);
-const origin = `http://127.0.0.1:${port}`;
 
 export default defineConfig({
 	testDir: 'tests/e2e',
@@ -33,16 +32,21 @@ export default defineConfig({
 			]
 		}
 	},
-	webServer: {
-		command: 'node build',
-		url: `${origin}/api/health`,
-		reuseExistingServer: false,
-		timeout: 60_000,
-		env: {
-			HOST: '127.0.0.1',
-			PORT: String(port),
-			ORIGIN: origin,
-			STEAMWISP_DB_NAME: process.env.STEAMWISP_DB_NAME ?? 'steamwisp_test'
+	webServer: [
+		{
+			// The local SMTP fake the app sends to; the tests read what it kept.
+			command: 'node --import tsx scripts/mail-fake.ts --fresh',
+			port: Number(e2eMail.STEAMWISP_MAIL_PORT),
+			reuseExistingServer: false,
+			timeout: 30_000,
+			env: e2eMail
+		},
+		{
+			command: 'node build',
+			url: `${origin}/api/health`,
+			reuseExistingServer: false,
+			timeout: 60_000,
+			env: appEnv(port)
 		}
-	}
+	]
 });

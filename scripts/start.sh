@@ -22,5 +22,14 @@ fi
 export HOST="$APP_HOST" PORT="$APP_PORT"
 export ORIGIN="${ORIGIN:-http://$APP_HOST:$APP_PORT}"
 npx tsx scripts/seed.ts --print-sign-ins
+
+# E-mail goes to the local SMTP fake (scripts/mail-fake.ts) unless STEAMWISP_SMTP_URL names a real server.
+if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
+	export STEAMWISP_MAIL_PORT="$MAIL_PORT"
+	node --import tsx scripts/mail-fake.ts &
+	mail_pid=$!
+	trap 'kill "$mail_pid" 2>/dev/null || true' EXIT
+	say "e-mail stays on this machine (fake SMTP on 127.0.0.1:$MAIL_PORT); admins read it in Desk → Mailbox"
+fi
 say "Steamwisp is at $ORIGIN  (Ctrl-C stops the app; 'npm run db:stop' stops the database)"
-exec node build
+node build
