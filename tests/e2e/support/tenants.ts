@@ -15,6 +15,7 @@ import {
 	demoUsers,
 	type DemoUser
 } from '../../../src/lib/server/seed/demo';
+import { demoPublishedSurvey } from '../../../src/lib/server/seed/findings';
 import type { Db } from './db';
 import { e2eMail } from './servers';
 
@@ -50,6 +51,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 	const client = demoClients[index];
 	const site = demoSites[index];
 	const survey = demoSurveys[index];
+	const published = [demoPublishedSurvey].filter((p) => p.firmId === firm.id);
 	const tag = index === 0 ? 'Ashgrove' : 'Brightwater';
 	const ids = {
 		otherClient: hex(index, 1),
@@ -141,6 +143,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 			site.id,
 			survey.name,
 			survey.id,
+			...published.flatMap((p) => [p.name, p.id]),
 			...users.flatMap((u) => [u.email, u.name, u.id]),
 			...Object.values(ids),
 			...Object.values(names),
@@ -148,7 +151,10 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 			message.id
 		],
 		hiddenFromClient: [
-			...hiddenFromAuditor,
+			names.otherClient,
+			names.otherSite,
+			names.otherSurvey,
+			ids.otherSurvey,
 			ids.otherClient,
 			// The demo survey is still in the field: not published, so not the client's to see.
 			survey.name,
