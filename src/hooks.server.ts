@@ -1,7 +1,14 @@
-import type { Handle } from '@sveltejs/kit';
+import type { Handle, HandleServerError } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth/lucia';
+import { pool } from '$lib/server/db';
 import { guardRoute } from '$lib/server/policy';
+
+// adapter-node closes the HTTP server on SIGTERM/SIGINT, then emits this; the process can only
+// exit once the database pool's idle connections are closed too.
+process.once('sveltekit:shutdown', () => {
+	pool.end().catch(() => {});
+});
 
 /** Fills locals.user and locals.session from the session cookie; refreshes or clears it. */
 const session: Handle = async ({ event, resolve }) => {
@@ -66,3 +73,13 @@ const headers: Handle = async ({ event, resolve }) => {
 
 // headers first so it wraps everything after it; guard last, once the session is known.
 export const handle = sequence(headers, session, guard);
+
+/**
+ * Unexpected errors are logged with their stack and shown to people only as a status and a
+ * generic message; refusals (4xx: not found, wrong method, not a form) are answers, not faults,
+ * so they are not logged as errors.
+ */
+export const handleError: HandleServerError = ({ error, status, message }) => {
+	if (status >= 500) console.error(error);
+	return { message };
+};

@@ -1,7 +1,7 @@
 /**
- * Reading form posts in actions. SvelteKit already answers 415 to a body that is not a form and
- * adapter-node 413 to one over BODY_SIZE_LIMIT; this turns a form that cannot be parsed (a
- * broken multipart body, say) into a clear 400 instead of a 500, and collapses it to plain
+ * Reading form posts in actions. SvelteKit already answers 415 to a body that is not a form;
+ * this keeps adapter-node's 413 for one over BODY_SIZE_LIMIT, turns a form that cannot be parsed
+ * (a broken multipart body, say) into a clear 400 instead of a 500, and collapses it to plain
  * strings so a file smuggled into a text field fails validation rather than reaching a query.
  */
 import { error, fail } from '@sveltejs/kit';
@@ -11,7 +11,9 @@ export async function readForm(request: Request): Promise<Record<string, string>
 	let data: FormData;
 	try {
 		data = await request.formData();
-	} catch {
+	} catch (e) {
+		// adapter-node stops reading past BODY_SIZE_LIMIT and says so with a 413.
+		if ((e as { status?: number }).status === 413) error(413, 'That form is too large to accept.');
 		error(400, 'That form could not be read. Reload the page and try again.');
 	}
 	const fields: Record<string, string> = {};
