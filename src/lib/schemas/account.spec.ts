@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { safeNext, signInSchema } from './account';
+import {
+	acceptInvitationSchema,
+	changePasswordSchema,
+	newPasswordSchema,
+	safeNext,
+	setPasswordSchema,
+	signInSchema
+} from './account';
 
 describe('sign-in form', () => {
 	it('normalises the e-mail address', () => {
@@ -26,5 +33,56 @@ describe('return path after sign-in', () => {
 		[null, null]
 	])('%s → %s', (input, expected) => {
 		expect(safeNext(input)).toBe(expected);
+	});
+});
+
+describe('new passwords', () => {
+	it('need at least 12 characters and say so', () => {
+		const r = setPasswordSchema.safeParse({ password: 'eleven char', confirm: 'eleven char' });
+		expect(r.error!.issues[0].message).toBe(
+			'Use at least 12 characters; a few words in a row work well.'
+		);
+		expect(
+			setPasswordSchema.safeParse({ password: 'twelve chars', confirm: 'twelve chars' }).success
+		).toBe(true);
+	});
+
+	it('refuse only spaces and overlong ones', () => {
+		expect(newPasswordSchema.safeParse(' '.repeat(20)).success).toBe(false);
+		expect(newPasswordSchema.safeParse('x'.repeat(257)).success).toBe(false);
+		expect(newPasswordSchema.safeParse('x'.repeat(256)).success).toBe(true);
+	});
+
+	it('must be typed the same twice', () => {
+		const r = setPasswordSchema.safeParse({
+			password: 'a long password',
+			confirm: 'a long passw0rd'
+		});
+		expect(r.error!.issues[0]).toMatchObject({
+			path: ['confirm'],
+			message: 'The two passwords differ. Type the same one twice.'
+		});
+	});
+
+	it('must differ from the current one when changing', () => {
+		const same = 'the same long password';
+		const r = changePasswordSchema.safeParse({ current: same, password: same, confirm: same });
+		expect(r.error!.issues[0].path).toEqual(['password']);
+	});
+
+	it('come with a trimmed name on invitation', () => {
+		const r = acceptInvitationSchema.parse({
+			name: '  Noor Castellanos ',
+			password: 'a long password',
+			confirm: 'a long password'
+		});
+		expect(r.name).toBe('Noor Castellanos');
+		expect(
+			acceptInvitationSchema.safeParse({
+				name: ' ',
+				password: 'a long password',
+				confirm: 'a long password'
+			}).success
+		).toBe(false);
 	});
 });
