@@ -3,10 +3,10 @@
  * tables 6 and 8). They agree with the Gibbs equation to within 25 mK; the solvers polish
  * them with Newton steps on the forward equation.
  */
-import { PowerSum } from './power-series';
+import { powerSeries, seriesValue } from './power-series';
 
 // Table 6, θ = Σ nᵢ π^Iᵢ (η + 1)^Jᵢ.
-const tph = new PowerSum(
+const tph = powerSeries(
 	[0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 1, 2, 2, 3, 3, 4, 5, 6],
 	[0, 1, 2, 6, 22, 32, 0, 1, 2, 3, 4, 10, 32, 10, 32, 10, 32, 32, 32, 32],
 	[
@@ -19,7 +19,7 @@ const tph = new PowerSum(
 );
 
 // Table 8, θ = Σ nᵢ π^Iᵢ (σ + 2)^Jᵢ.
-const tps = new PowerSum(
+const tps = powerSeries(
 	[0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 2, 2, 2, 2, 2, 3, 3, 4],
 	[0, 1, 2, 3, 11, 31, 0, 1, 2, 3, 12, 31, 0, 1, 2, 9, 31, 10, 32, 32],
 	[
@@ -33,10 +33,10 @@ const tps = new PowerSum(
 
 /** Region 1 temperature [K] from p [MPa] and h [kJ/kg], backward eq. 11 (no range check). */
 export function region1TemperaturePH(p: number, h: number): number {
-	return tph.value(p, h / 2500 + 1);
+	return seriesValue(tph, p, h / 2500 + 1);
 }
 
 /** Region 1 temperature [K] from p [MPa] and s [kJ/(kg K)], backward eq. 13 (no range check). */
 export function region1TemperaturePS(p: number, s: number): number {
-	return tps.value(p, s + 2);
+	return seriesValue(tps, p, s + 2);
 }

@@ -5,7 +5,17 @@
 import { R } from './constants';
 import { CP, CV, H, S, U, V, W, propertiesBuffer, toProperties } from './properties-buffer';
 import type { Properties } from './types';
-import { F, F_X, F_XX, F_XY, F_Y, F_YY, GibbsSeries } from './power-series';
+import {
+	F,
+	F_X,
+	F_XX,
+	F_XY,
+	F_Y,
+	F_YY,
+	powerSeries,
+	seriesDerivatives,
+	seriesYDerivatives
+} from './power-series';
 
 // Table 2.
 const I = [
@@ -28,7 +38,7 @@ const n = [
 	-0.93537087292458e-25
 ];
 
-const series = new GibbsSeries(I, J, n);
+const series = powerSeries(I, J, n);
 const g = new Float64Array(6);
 
 /**
@@ -40,7 +50,7 @@ export function region1Into(p: number, T: number, out: Float64Array): void {
 	const pi = p / 16.53;
 	const tau = 1386 / T;
 	// The series runs in (7.1 − π): d/dπ flips the sign of odd π-derivatives.
-	series.evaluate(7.1 - pi, tau - 1.222, g);
+	seriesDerivatives(series, 7.1 - pi, tau - 1.222, g);
 	const gp = -g[F_X];
 	const gpp = g[F_XX];
 	const gt = g[F_Y];
@@ -63,7 +73,7 @@ export function region1Into(p: number, T: number, out: Float64Array): void {
  */
 export function region1HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 1386 / T;
-	series.evaluateY(7.1 - p / 16.53, tau - 1.222, g);
+	seriesYDerivatives(series, 7.1 - p / 16.53, tau - 1.222, g);
 	out[H] = tau * g[F_Y] * R * T;
 	out[S] = R * (tau * g[F_Y] - g[F]);
 	out[CP] = -R * tau * tau * g[F_YY];

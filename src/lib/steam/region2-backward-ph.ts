@@ -3,7 +3,7 @@
  * by the 2b/2c boundary (IAPWS R7-97(2012) eqs. 20–24, tables 19–23). Within 10 mK of the
  * Gibbs equation in 2a and 2b, 25 mK in 2c; the solvers polish with Newton steps.
  */
-import { PowerSum } from './power-series';
+import { powerSeries, seriesValue } from './power-series';
 
 // Table 19, the B2bc equation.
 const n1 = 0.90584278514723e3;
@@ -29,7 +29,7 @@ export function b2bcEnthalpy(p: number): number {
 const P_2BC_SAT = 6.546699678;
 
 // Table 20, subregion 2a: θ = Σ nᵢ π^Iᵢ (η − 2.1)^Jᵢ.
-const t2a = new PowerSum(
+const t2a = powerSeries(
 	[
 		0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 1, 1, 1, 2, 2, 2, 2, 2, 2, 2, 2, 3, 3, 4, 4, 4, 5, 5, 5, 6,
 		6, 7
@@ -52,7 +52,7 @@ const t2a = new PowerSum(
 );
 
 // Table 21, subregion 2b: θ = Σ nᵢ (π − 2)^Iᵢ (η − 2.6)^Jᵢ.
-const t2b = new PowerSum(
+const t2b = powerSeries(
 	[
 		0, 0, 0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 1, 1, 2, 2, 2, 2, 3, 3, 3, 3, 4, 4, 4, 4, 4, 4, 5, 5,
 		5, 6, 7, 7, 9, 9
@@ -75,7 +75,7 @@ const t2b = new PowerSum(
 );
 
 // Table 22, subregion 2c: θ = Σ nᵢ (π + 25)^Iᵢ (η − 1.8)^Jᵢ.
-const t2c = new PowerSum(
+const t2c = powerSeries(
 	[-7, -7, -6, -6, -5, -5, -2, -2, -1, -1, 0, 0, 1, 1, 2, 6, 6, 6, 6, 6, 6, 6, 6],
 	[0, 4, 0, 2, 0, 2, 0, 1, 0, 2, 0, 1, 4, 8, 4, 0, 1, 4, 10, 12, 16, 20, 22],
 	[
@@ -90,17 +90,17 @@ const t2c = new PowerSum(
 
 /** Region 2a temperature [K] from p [MPa], h [kJ/kg] (eq. 22). */
 export function region2aTemperaturePH(p: number, h: number): number {
-	return t2a.value(p, h / 2000 - 2.1);
+	return seriesValue(t2a, p, h / 2000 - 2.1);
 }
 
 /** Region 2b temperature [K] from p [MPa], h [kJ/kg] (eq. 23). */
 export function region2bTemperaturePH(p: number, h: number): number {
-	return t2b.value(p - 2, h / 2000 - 2.6);
+	return seriesValue(t2b, p - 2, h / 2000 - 2.6);
 }
 
 /** Region 2c temperature [K] from p [MPa], h [kJ/kg] (eq. 24). */
 export function region2cTemperaturePH(p: number, h: number): number {
-	return t2c.value(p + 25, h / 2000 - 1.8);
+	return seriesValue(t2c, p + 25, h / 2000 - 1.8);
 }
 
 /**

@@ -3,14 +3,14 @@
  * (s ≥ 5.85 kJ/(kg K)) and 2c (IAPWS R7-97(2012) eqs. 25–27, tables 25–28). The solvers
  * polish the result with Newton steps on the Gibbs equation.
  */
-import { PowerSum } from './power-series';
+import { powerSeries, seriesValue } from './power-series';
 
 /** Entropy of the 2b/2c boundary [kJ/(kg K)] for T(p, s) (release eq. 26 preamble). */
 export const S_2BC = 5.85;
 
 // Table 25, subregion 2a: θ = Σ nᵢ π^Iᵢ (σ − 2)^Jᵢ with quarter-integer Iᵢ; the sum runs in
 // π^(1/4), with the exponents below four times the table's.
-const t2a = new PowerSum(
+const t2a = powerSeries(
 	[
 		-6, -6, -6, -6, -6, -6, -5, -5, -5, -4, -4, -4, -4, -4, -4, -3, -3, -2, -2, -2, -2, -1, -1, -1,
 		-1, 1, 1, 1, 1, 2, 2, 2, 2, 2, 2, 2, 3, 3, 3, 3, 4, 4, 5, 5, 6, 6
@@ -36,7 +36,7 @@ const t2a = new PowerSum(
 );
 
 // Table 26, subregion 2b: θ = Σ nᵢ π^Iᵢ (10 − σ)^Jᵢ.
-const t2b = new PowerSum(
+const t2b = powerSeries(
 	[
 		-6, -6, -5, -5, -4, -4, -4, -3, -3, -3, -3, -2, -2, -2, -2, -1, -1, -1, -1, -1, 0, 0, 0, 0, 0,
 		0, 0, 1, 1, 1, 1, 1, 1, 2, 2, 2, 3, 3, 3, 4, 4, 5, 5, 5
@@ -61,7 +61,7 @@ const t2b = new PowerSum(
 );
 
 // Table 27, subregion 2c: θ = Σ nᵢ π^Iᵢ (2 − σ)^Jᵢ.
-const t2c = new PowerSum(
+const t2c = powerSeries(
 	[-2, -2, -1, 0, 0, 0, 0, 1, 1, 1, 1, 2, 2, 2, 3, 3, 3, 4, 4, 4, 5, 5, 5, 6, 6, 7, 7, 7, 7, 7],
 	[0, 1, 0, 0, 1, 2, 3, 0, 1, 3, 4, 0, 1, 2, 0, 1, 5, 0, 1, 4, 0, 1, 2, 0, 1, 0, 1, 3, 4, 5],
 	[
@@ -78,17 +78,17 @@ const t2c = new PowerSum(
 
 /** Region 2a temperature [K] from p [MPa], s [kJ/(kg K)] (eq. 25). */
 export function region2aTemperaturePS(p: number, s: number): number {
-	return t2a.value(Math.sqrt(Math.sqrt(p)), s / 2 - 2);
+	return seriesValue(t2a, Math.sqrt(Math.sqrt(p)), s / 2 - 2);
 }
 
 /** Region 2b temperature [K] from p [MPa], s [kJ/(kg K)] (eq. 26). */
 export function region2bTemperaturePS(p: number, s: number): number {
-	return t2b.value(p, 10 - s / 0.7853);
+	return seriesValue(t2b, p, 10 - s / 0.7853);
 }
 
 /** Region 2c temperature [K] from p [MPa], s [kJ/(kg K)] (eq. 27). */
 export function region2cTemperaturePS(p: number, s: number): number {
-	return t2c.value(p, 2 - s / 2.9251);
+	return seriesValue(t2c, p, 2 - s / 2.9251);
 }
 
 /**

@@ -4,7 +4,17 @@
  */
 import { R } from './constants';
 import { CP, CV, H, S, U, V, W, propertiesBuffer, toProperties } from './properties-buffer';
-import { F, F_X, F_XX, F_XY, F_Y, F_YY, GibbsSeries } from './power-series';
+import {
+	F,
+	F_X,
+	F_XX,
+	F_XY,
+	F_Y,
+	F_YY,
+	powerSeries,
+	seriesDerivatives,
+	seriesYDerivatives
+} from './power-series';
 import type { Properties } from './types';
 
 // Table 10, ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ.
@@ -37,8 +47,8 @@ const n = [
 	0.73087610595061e-28, 0.55414715350778e-16, -0.9436970724121e-6
 ];
 
-const ideal = new GibbsSeries([0, 0, 0, 0, 0, 0, 0, 0, 0], J0, n0);
-const residual = new GibbsSeries(I, J, n);
+const ideal = powerSeries([0, 0, 0, 0, 0, 0, 0, 0, 0], J0, n0);
+const residual = powerSeries(I, J, n);
 const g0 = new Float64Array(6);
 const gr = new Float64Array(6);
 
@@ -81,8 +91,8 @@ export function idealPlusResidualInto(
 export function region2Into(p: number, T: number, out: Float64Array): void {
 	const pi = p;
 	const tau = 540 / T;
-	ideal.evaluate(1, tau, g0);
-	residual.evaluate(pi, tau - 0.5, gr);
+	seriesDerivatives(ideal, 1, tau, g0);
+	seriesDerivatives(residual, pi, tau - 0.5, gr);
 	idealPlusResidualInto(p, T, pi, tau, g0, gr, out);
 }
 
@@ -107,8 +117,8 @@ export function idealPlusResidualHsCpInto(
 /** Only h, s and cp of region 2 at p [MPa], T [K] into slots H, S, CP. */
 export function region2HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 540 / T;
-	ideal.evaluateY(1, tau, g0);
-	residual.evaluateY(p, tau - 0.5, gr);
+	seriesYDerivatives(ideal, 1, tau, g0);
+	seriesYDerivatives(residual, p, tau - 0.5, gr);
 	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
 }
 

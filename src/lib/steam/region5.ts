@@ -3,7 +3,7 @@
  * equation as ideal-gas plus residual part (IAPWS R7-97(2012) eqs. 32–34, tables 37–39).
  */
 import { propertiesBuffer, toProperties } from './properties-buffer';
-import { GibbsSeries } from './power-series';
+import { powerSeries, seriesDerivatives, seriesYDerivatives } from './power-series';
 import { idealPlusResidualHsCpInto, idealPlusResidualInto } from './region2';
 import type { Properties } from './types';
 
@@ -22,8 +22,8 @@ const n = [
 	-0.41163275453471e-5, 0.37919454822955e-7
 ];
 
-const ideal = new GibbsSeries([0, 0, 0, 0, 0, 0], J0, n0);
-const residual = new GibbsSeries(I, J, n);
+const ideal = powerSeries([0, 0, 0, 0, 0, 0], J0, n0);
+const residual = powerSeries(I, J, n);
 const g0 = new Float64Array(6);
 const gr = new Float64Array(6);
 
@@ -34,16 +34,16 @@ const gr = new Float64Array(6);
  */
 export function region5Into(p: number, T: number, out: Float64Array): void {
 	const tau = 1000 / T;
-	ideal.evaluate(1, tau, g0);
-	residual.evaluate(p, tau, gr);
+	seriesDerivatives(ideal, 1, tau, g0);
+	seriesDerivatives(residual, p, tau, gr);
 	idealPlusResidualInto(p, T, p, tau, g0, gr, out);
 }
 
 /** Only h, s and cp of region 5 at p [MPa], T [K] into slots H, S, CP. */
 export function region5HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 1000 / T;
-	ideal.evaluateY(1, tau, g0);
-	residual.evaluateY(p, tau, gr);
+	seriesYDerivatives(ideal, 1, tau, g0);
+	seriesYDerivatives(residual, p, tau, gr);
 	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
 }
 
