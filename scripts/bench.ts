@@ -161,16 +161,15 @@ function table(ours: { cpu: Rates; wall: Rates }, python: PythonRates | null): s
 	if (!python) return lines;
 	lines.push(`  python3-iapws ${wall(python.wall)}`);
 	lines.push(
-		'IAPWS97() also computes transport and derived properties; its bare region functions:'
+		'IAPWS97() also computes transport and derived properties; its bare functions, like for like:'
 	);
 	for (const [op, name] of [
-		['ptRegion1', '_Region1'],
-		['ptRegion2', '_Region2']
+		['ptRegion1', '_Region1(T, p)'],
+		['ptRegion2', '_Region2(T, p)'],
+		['saturationTemperature', '_TSat_P(p)']
 	] as const) {
 		const core = python.core[op] ?? NaN;
-		lines.push(
-			`  ${name}(T, p) ${si(core)}/s, Steamwisp ${(ours.cpu[op] / core).toFixed(0)}× that`
-		);
+		lines.push(`  ${name} ${si(core)}/s, Steamwisp ${(ours.cpu[op] / core).toFixed(0)}× that`);
 	}
 	return lines;
 }
@@ -196,7 +195,7 @@ function main(): void {
 			`Node ${process.version}, one thread, ${MEASURE_S} CPU-seconds per operation after ${WARM_UP_S} s warm-up;`,
 			`load average ${load} on ${availableParallelism()} CPUs (rates are per CPU second of this process)`,
 			python
-				? `beside ${python.library} (IAPWS-IF97): IAPWS97() calls, _TSat_P for saturationTemperature`
+				? `beside ${python.library} (IAPWS-IF97): its public IAPWS97() calls (saturationTemperature: IAPWS97(P, x=0).T)`
 				: 'python3-iapws not found (apt-get install -y python3-iapws): engine figures only',
 			'',
 			...table(ours, python),
