@@ -15,6 +15,7 @@ import {
 	seriesDerivatives,
 	seriesYDerivatives
 } from './power-series';
+import { idealCoefficients, idealGasInto } from './ideal-gas';
 import type { Properties } from './types';
 
 // Table 10, ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ.
@@ -47,7 +48,7 @@ const n = [
 	0.73087610595061e-28, 0.55414715350778e-16, -0.9436970724121e-6
 ];
 
-const ideal = powerSeries([0, 0, 0, 0, 0, 0, 0, 0, 0], J0, n0);
+const ideal = idealCoefficients(J0, n0);
 const residual = powerSeries(I, J, n);
 const g0 = new Float64Array(6);
 const gr = new Float64Array(6);
@@ -91,13 +92,13 @@ export function idealPlusResidualInto(
 export function region2Into(p: number, T: number, out: Float64Array): void {
 	const pi = p;
 	const tau = 540 / T;
-	seriesDerivatives(ideal, 1, tau, g0);
+	idealGasInto(ideal, tau, g0);
 	seriesDerivatives(residual, pi, tau - 0.5, gr);
 	idealPlusResidualInto(p, T, pi, tau, g0, gr, out);
 }
 
 /**
- * h, s and cp from the ideal and residual sums of evaluateY, into slots H, S, CP (the parts of
+ * h, s and cp from the ideal and residual sums (τ-derivatives only), into slots H, S, CP (the parts of
  * idealPlusResidualInto a temperature iteration needs).
  */
 export function idealPlusResidualHsCpInto(
@@ -117,7 +118,7 @@ export function idealPlusResidualHsCpInto(
 /** Only h, s and cp of region 2 at p [MPa], T [K] into slots H, S, CP. */
 export function region2HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 540 / T;
-	seriesYDerivatives(ideal, 1, tau, g0);
+	idealGasInto(ideal, tau, g0);
 	seriesYDerivatives(residual, p, tau - 0.5, gr);
 	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
 }

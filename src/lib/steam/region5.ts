@@ -5,6 +5,7 @@
 import { propertiesBuffer, toProperties } from './properties-buffer';
 import { powerSeries, seriesDerivatives, seriesYDerivatives } from './power-series';
 import { idealPlusResidualHsCpInto, idealPlusResidualInto } from './region2';
+import { idealCoefficients, idealGasInto } from './ideal-gas';
 import type { Properties } from './types';
 
 // Table 37, ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ.
@@ -22,7 +23,7 @@ const n = [
 	-0.41163275453471e-5, 0.37919454822955e-7
 ];
 
-const ideal = powerSeries([0, 0, 0, 0, 0, 0], J0, n0);
+const ideal = idealCoefficients(J0, n0);
 const residual = powerSeries(I, J, n);
 const g0 = new Float64Array(6);
 const gr = new Float64Array(6);
@@ -34,7 +35,7 @@ const gr = new Float64Array(6);
  */
 export function region5Into(p: number, T: number, out: Float64Array): void {
 	const tau = 1000 / T;
-	seriesDerivatives(ideal, 1, tau, g0);
+	idealGasInto(ideal, tau, g0);
 	seriesDerivatives(residual, p, tau, gr);
 	idealPlusResidualInto(p, T, p, tau, g0, gr, out);
 }
@@ -42,7 +43,7 @@ export function region5Into(p: number, T: number, out: Float64Array): void {
 /** Only h, s and cp of region 5 at p [MPa], T [K] into slots H, S, CP. */
 export function region5HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 1000 / T;
-	seriesYDerivatives(ideal, 1, tau, g0);
+	idealGasInto(ideal, tau, g0);
 	seriesYDerivatives(residual, p, tau, gr);
 	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
 }
