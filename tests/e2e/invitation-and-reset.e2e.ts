@@ -6,6 +6,7 @@
  */
 import { expect, test, type Page } from '@playwright/test';
 import { demoPassword } from '../../src/lib/server/seed/demo';
+import { openTestDb, rows } from './support/db';
 import { linkIn, mailTo, waitForMail } from './support/mailbox';
 
 const stamp = Date.now();
@@ -110,6 +111,32 @@ test('an invited consultant sets a password, signs in, resets it; used links are
 	await expect(forgot.getByText('This link has already been used.')).toBeVisible();
 
 	for (const c of [adminContext, inviteeContext, resetContext]) await c.close();
+
+	// Each step left its row in the audit log, and no row holds a token.
+	const db = openTestDb();
+	const log = await rows<{ action: string; text: string }>(
+		db,
+		`SELECT a.action, CONCAT_WS(' ', a.before, a.after) AS text FROM audit_log a
+		 JOIN users u ON u.email = ?
+		 LEFT JOIN tokens t ON t.id = a.entity_id AND t.email = u.email
+		 WHERE a.entity_id = u.id OR t.id IS NOT NULL
+		 ORDER BY a.id`,
+		[invitee]
+	);
+	await db.end();
+	expect(log.map((r) => r.action)).toEqual([
+		'invite',
+		'invite-accept',
+		'sign-in',
+		'reset-request',
+		'password-reset',
+		'sign-in-failed',
+		'sign-in'
+	]);
+	for (const link of [inviteLink, resetLink]) {
+		const token = link.split('/').pop()!;
+		expect(log.some((r) => (r.text ?? '').includes(token))).toBe(false);
+	}
 });
 
 test('asking to reset an unknown address looks the same and sends nothing', async ({ page }) => {

@@ -10,6 +10,7 @@ import {
 } from '$lib/server/auth/attempts';
 import { addressDigest, auditAuth } from '$lib/server/auth/audit';
 import { tooManyMessage } from '$lib/server/auth/limits';
+import { lucia } from '$lib/server/auth/lucia';
 import { verifyPassword } from '$lib/server/auth/password';
 import { startSession } from '$lib/server/auth/sessions';
 import { db } from '$lib/server/db';
@@ -76,7 +77,9 @@ export const actions: Actions = {
 		await startSession(cookies, user.id, request.headers.get('user-agent'));
 		await db.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, user.id));
 		await auditAuth({ ...subject, action: 'sign-in', actorId: user.id });
+		// Housekeeping that needs no scheduler: old counters and expired sessions go now and then.
 		await pruneAttempts();
+		await lucia.deleteExpiredSessions();
 		redirect(303, safeNext(next) ?? homeFor[roleSchema.parse(user.role)]);
 	}
 };
