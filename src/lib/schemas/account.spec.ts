@@ -30,6 +30,9 @@ describe('return path after sign-in', () => {
 		['//evil.example/', null],
 		['https://evil.example/', null],
 		['/\\evil.example', null],
+		['/\t/evil.example', null],
+		['/\n/evil.example', null],
+		['/ /evil.example', null],
 		[null, null]
 	])('%s → %s', (input, expected) => {
 		expect(safeNext(input)).toBe(expected);
@@ -77,6 +80,14 @@ describe('new passwords', () => {
 			confirm: 'a long password'
 		});
 		expect(r.name).toBe('Noor Castellanos');
+		const twoLines = {
+			name: 'Noor\nBcc: x@example.test',
+			password: 'a long password',
+			confirm: 'a long password'
+		};
+		expect(acceptInvitationSchema.safeParse(twoLines).error!.issues[0].message).toBe(
+			'Write your name on one line.'
+		);
 		expect(
 			acceptInvitationSchema.safeParse({
 				name: ' ',

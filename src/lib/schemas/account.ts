@@ -49,7 +49,8 @@ export const acceptInvitationSchema = z
 			.string({ error: 'Enter your name.' })
 			.trim()
 			.min(1, 'Enter your name.')
-			.max(160, 'Use at most 160 characters for your name.'),
+			.max(160, 'Use at most 160 characters for your name.')
+			.refine((n) => !hasControl(n), 'Write your name on one line.'),
 		password: newPasswordSchema,
 		confirm: z.string().max(PASSWORD_MAX)
 	})
@@ -80,8 +81,22 @@ export const homeFor: Record<Role, string> = {
 	client: '/ladder'
 };
 
-/** A same-site path to return to after sign-in, or null (never an open redirect). */
+/**
+ * A same-site path to return to after sign-in, or null (never an open redirect). Browsers drop
+ * tabs and line breaks from URLs, so "/\t/evil.example" would become "//evil.example": any
+ * control character or white space disqualifies a path.
+ */
 export function safeNext(next: string | null | undefined): string | null {
 	if (!next || !next.startsWith('/') || next.startsWith('//') || next.includes('\\')) return null;
+	if (hasControl(next) || /\s/.test(next)) return null;
 	return next;
+}
+
+/** Whether text holds a control character (C0, DEL or C1): line breaks, tabs, NUL… */
+function hasControl(text: string): boolean {
+	for (let i = 0; i < text.length; i++) {
+		const c = text.charCodeAt(i);
+		if (c < 0x20 || (c >= 0x7f && c <= 0x9f)) return true;
+	}
+	return false;
 }

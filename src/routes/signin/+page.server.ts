@@ -40,7 +40,7 @@ const decoyHash =
 const mismatch = 'That e-mail address and password do not match an active account.';
 
 export const actions: Actions = {
-	default: async ({ request, cookies, getClientAddress }) => {
+	default: async ({ request, cookies, locals, getClientAddress }) => {
 		const form = await readForm(request);
 		const parsed = signInSchema.safeParse(form);
 		if (!parsed.success) {
@@ -74,6 +74,8 @@ export const actions: Actions = {
 		}
 		await clearAttempts(keys[0]);
 		await refundAttempt(keys[1]);
+		// A fresh session id on every sign-in; any session this browser had ends (no fixation).
+		if (locals.session) await lucia.invalidateSession(locals.session.id);
 		await startSession(cookies, user.id, request.headers.get('user-agent'));
 		await db.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, user.id));
 		await auditAuth({ ...subject, action: 'sign-in', actorId: user.id });
