@@ -9,7 +9,10 @@ export interface DatabaseHealth {
 }
 
 /** A real round trip: counts applied migrations (fails if the schema was never migrated). */
-export async function checkDatabase(db: Database = appDb, timeoutMs = 2500): Promise<DatabaseHealth> {
+export async function checkDatabase(
+	db: Database = appDb,
+	timeoutMs = 2500
+): Promise<DatabaseHealth> {
 	const started = performance.now();
 	try {
 		const query = db.execute(sql`SELECT COUNT(*) AS n FROM __drizzle_migrations`);
