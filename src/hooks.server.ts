@@ -1,14 +1,17 @@
 import type { Handle, HandleServerError } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
+import { dev } from '$app/environment';
 import { lucia } from '$lib/server/auth/lucia';
 import { pool } from '$lib/server/db';
 import { guardRoute } from '$lib/server/policy';
 
 // adapter-node closes the HTTP server on SIGTERM/SIGINT, then emits this; the process can only
 // exit once the database pool's idle connections are closed too.
-process.once('sveltekit:shutdown', () => {
-	pool.end().catch(() => {});
-});
+if (!dev) {
+	process.once('sveltekit:shutdown', () => {
+		pool.end().catch(() => {});
+	});
+}
 
 /** Fills locals.user and locals.session from the session cookie; refreshes or clears it. */
 const session: Handle = async ({ event, resolve }) => {
