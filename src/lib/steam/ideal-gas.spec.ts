@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { idealCoefficients, idealGasInto } from './ideal-gas';
-import { F, F_Y, F_YY } from './power-series';
+import { DERIVATIVE_SLOTS, F, F_Y, F_YY, F_YYY } from './power-series';
 
 // Region 2's ideal-gas table (IAPWS R7-97(2012) table 10) as the example.
 const J = [0, 1, -5, -4, -3, -2, -1, 2, 3];
@@ -10,8 +10,8 @@ const n = [
 ];
 
 describe('idealGasInto', () => {
-	it('equals the term-by-term sums with Math.pow, and their τ-derivatives', () => {
-		const out = new Float64Array(6);
+	it('equals the term-by-term sums with Math.pow, and their first three τ-derivatives', () => {
+		const out = new Float64Array(DERIVATIVE_SLOTS);
 		const c = idealCoefficients(J, n);
 		for (const tau of [0.5, 0.9, 1.7]) {
 			idealGasInto(c, tau, out);
@@ -19,6 +19,8 @@ describe('idealGasInto', () => {
 			expect(out[F] / sum((e) => tau ** e) - 1).toBeCloseTo(0, 13);
 			expect(out[F_Y] / sum((e) => e * tau ** (e - 1)) - 1).toBeCloseTo(0, 13);
 			expect(out[F_YY] / sum((e) => e * (e - 1) * tau ** (e - 2)) - 1).toBeCloseTo(0, 12);
+			const third = sum((e) => e * (e - 1) * (e - 2) * tau ** (e - 3));
+			expect(out[F_YYY] / third - 1).toBeCloseTo(0, 12);
 		}
 	});
 

@@ -3,7 +3,7 @@
  * and 3 (IAPWS R7-97(2012) eqs. 16 and 33), written out term by term: a handful of
  * multiplications, cheaper than the general series for nine terms.
  */
-import { F, F_X, F_XX, F_XY, F_Y, F_YY } from './power-series';
+import { F, F_X, F_XX, F_XY, F_Y, F_YY, F_YYY } from './power-series';
 
 /** Coefficients by exponent, index J + 5 for J = −5 … 3 (zero where a table has no term). */
 export function idealCoefficients(J: readonly number[], n: readonly number[]): Float64Array {
@@ -16,8 +16,9 @@ export function idealCoefficients(J: readonly number[], n: readonly number[]): F
 }
 
 /**
- * γ°(τ) without its ln π term, with its τ-derivatives, into out[F], out[F_Y], out[F_YY]; the
- * π-slots are zero (the ln π term's derivatives are applied where the properties are formed).
+ * γ°(τ) without its ln π term, with its first three τ-derivatives, into out[F], out[F_Y],
+ * out[F_YY], out[F_YYY]; the π-slots are zero (the ln π term's derivatives are applied where the
+ * properties are formed).
  */
 export function idealGasInto(c: Float64Array, tau: number, out: Float64Array): void {
 	const t2 = tau * tau;
@@ -29,6 +30,7 @@ export function idealGasInto(c: Float64Array, tau: number, out: Float64Array): v
 	const r5 = r4 * r;
 	const r6 = r3 * r3;
 	const r7 = r6 * r;
+	const r8 = r4 * r4;
 	const m5 = c[0];
 	const m4 = c[1];
 	const m3 = c[2];
@@ -43,6 +45,8 @@ export function idealGasInto(c: Float64Array, tau: number, out: Float64Array): v
 	out[F_Y] += 3 * p3 * t2;
 	out[F_YY] = 30 * m5 * r7 + 20 * m4 * r6 + 12 * m3 * r5 + 6 * m2 * r4 + 2 * m1 * r3 + 2 * p2;
 	out[F_YY] += 6 * p3 * tau;
+	out[F_YYY] = -210 * m5 * r8 - 120 * m4 * r7 - 60 * m3 * r6 - 24 * m2 * r5 - 6 * m1 * r4;
+	out[F_YYY] += 6 * p3;
 	out[F_X] = 0;
 	out[F_XX] = 0;
 	out[F_XY] = 0;

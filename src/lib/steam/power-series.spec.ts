@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import {
+	DERIVATIVE_SLOTS,
 	F,
 	F_X,
 	F_XX,
 	F_XY,
 	F_Y,
 	F_YY,
+	F_YYY,
 	powerSeries,
 	seriesDerivatives,
 	seriesValue,
@@ -62,12 +64,18 @@ describe('seriesDerivatives', () => {
 		expect(out[F_XY] / fxy - 1).toBeCloseTo(0, 4);
 	});
 
-	it('seriesYDerivatives gives the same f, f_y, f_yy', () => {
-		const full = new Float64Array(6);
-		const part = new Float64Array(6);
-		seriesDerivatives(series, 0.9, 1.05, full);
-		seriesYDerivatives(series, 0.9, 1.05, part);
+	it('seriesYDerivatives gives the same f, f_y, f_yy, and f_yyy', () => {
+		const full = new Float64Array(DERIVATIVE_SLOTS);
+		const part = new Float64Array(DERIVATIVE_SLOTS);
+		const [x, y] = [0.9, 1.05];
+		seriesDerivatives(series, x, y, full);
+		seriesYDerivatives(series, x, y, part);
 		for (const slot of [F, F_Y, F_YY]) expect(part[slot]).toBe(full[slot]);
+		const fyyy = n.reduce(
+			(sum, nk, k) => sum + nk * x ** I[k] * J[k] * (J[k] - 1) * (J[k] - 2) * y ** (J[k] - 3),
+			0
+		);
+		expect(part[F_YYY] / fyyy - 1).toBeCloseTo(0, 12);
 	});
 
 	it('derivatives of a single monomial are exact', () => {

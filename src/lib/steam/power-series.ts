@@ -121,6 +121,10 @@ export const F_XX = 2;
 export const F_Y = 3;
 export const F_YY = 4;
 export const F_XY = 5;
+/** Third y-derivative, written only by the τ-only evaluators (for dcp/dT in the solvers). */
+export const F_YYY = 6;
+/** Length of an array that receives a series and its derivatives. */
+export const DERIVATIVE_SLOTS = 7;
 
 /**
  * The series with its first and second partial derivatives, into out[F … F_XY]: the Gibbs
@@ -170,8 +174,8 @@ export function seriesDerivatives(
 }
 
 /**
- * Only f, f_y and f_yy into out[F], out[F_Y], out[F_YY] (y ≠ 0): enough for h, s and cp,
- * which is all a temperature iteration needs, at about half the work.
+ * Only f, f_y, f_yy and f_yyy into out[F], out[F_Y], out[F_YY], out[F_YYY] (y ≠ 0): enough
+ * for h, s, cp and dcp/dT, which is all a temperature iteration needs, at about half the work.
  */
 export function seriesYDerivatives(
 	series: PowerSeries,
@@ -187,15 +191,20 @@ export function seriesYDerivatives(
 	let f = 0;
 	let fy = 0;
 	let fyy = 0;
+	let fyyy = 0;
 	for (let k = 0; k < n.length; k++) {
 		const t = n[k] * px[ix[k]] * py[iy[k]];
-		const jt = j[k] * t;
+		const jk = j[k];
+		const jt = jk * t;
+		const jjt = (jk - 1) * jt;
 		f += t;
 		fy += jt;
-		fyy += (j[k] - 1) * jt;
+		fyy += jjt;
+		fyyy += (jk - 2) * jjt;
 	}
 	const ry = 1 / y;
 	out[F] = f;
 	out[F_Y] = fy * ry;
 	out[F_YY] = fyy * ry * ry;
+	out[F_YYY] = fyyy * ry * ry * ry;
 }

@@ -11,10 +11,15 @@ export const S = 3;
 export const CP = 4;
 export const CV = 5;
 export const W = 6;
+/**
+ * dcp/dT at constant p [kJ/(kg K²)], written only by the h-s-cp evaluations of the temperature
+ * solver, which use it for a second-order step.
+ */
+export const CP_T = 7;
 
-/** A buffer with one slot per property (v, h, u, s, cp, cv, w). */
+/** A buffer with one slot per property (v, h, u, s, cp, cv, w) and CP_T. */
 export function propertiesBuffer(): Float64Array {
-	return new Float64Array(7);
+	return new Float64Array(8);
 }
 
 /** Builds a Properties object at p [MPa], T [K] from a filled buffer. */

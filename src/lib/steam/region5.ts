@@ -3,7 +3,12 @@
  * equation as ideal-gas plus residual part (IAPWS R7-97(2012) eqs. 32–34, tables 37–39).
  */
 import { propertiesBuffer, toProperties } from './properties-buffer';
-import { powerSeries, seriesDerivatives, seriesYDerivatives } from './power-series';
+import {
+	DERIVATIVE_SLOTS,
+	powerSeries,
+	seriesDerivatives,
+	seriesYDerivatives
+} from './power-series';
 import { idealPlusResidualHsCpInto, idealPlusResidualInto } from './region2';
 import { idealCoefficients, idealGasInto } from './ideal-gas';
 import type { Properties } from './types';
@@ -25,8 +30,8 @@ const n = [
 
 const ideal = idealCoefficients(J0, n0);
 const residual = powerSeries(I, J, n);
-const g0 = new Float64Array(6);
-const gr = new Float64Array(6);
+const g0 = new Float64Array(DERIVATIVE_SLOTS);
+const gr = new Float64Array(DERIVATIVE_SLOTS);
 
 /**
  * Region 5 properties at pressure p [MPa] and temperature T [K] into buffer slots V … W
@@ -40,7 +45,7 @@ export function region5Into(p: number, T: number, out: Float64Array): void {
 	idealPlusResidualInto(p, T, p, tau, g0, gr, out);
 }
 
-/** Only h, s and cp of region 5 at p [MPa], T [K] into slots H, S, CP. */
+/** Only h, s, cp and dcp/dT of region 5 at p [MPa], T [K] into slots H, S, CP, CP_T. */
 export function region5HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 1000 / T;
 	idealGasInto(ideal, tau, g0);
