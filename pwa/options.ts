@@ -13,6 +13,9 @@ export const pwaOptions: SvelteKitPWAOptions = {
 	registerType: 'autoUpdate',
 	injectRegister: false,
 	strategies: 'generateSW',
+	// Absolute, so the worker is found from nested pages too (not ./sw.js beside /password/…).
+	base: '/',
+	scope: '/',
 	manifest,
 	includeManifestIcons: true,
 	kit: { includeVersionFile: true },

@@ -5,5 +5,11 @@ cd "$ROOT"
 ensure_node_modules
 bash scripts/db.sh up
 npx tsx scripts/migrate.ts
+if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
+	export STEAMWISP_MAIL_PORT="$MAIL_PORT"
+	node --import tsx scripts/mail-fake.ts &
+	mail_pid=$!
+	trap 'kill "$mail_pid" 2>/dev/null || true' EXIT
+fi
 # Started directly (not through npx) so Ctrl-C stops the server itself (STACK.md gotcha 4).
-exec node_modules/.bin/vite dev --host "$APP_HOST" --port "${PORT:-5173}"
+node_modules/.bin/vite dev --host "$APP_HOST" --port "${PORT:-5173}"

@@ -74,7 +74,10 @@ export const changePasswordSchema = z
 export const forgotPasswordSchema = z.object({ email: emailSchema });
 
 /** Where each role starts after signing in. */
-export const homeFor: Record<Role, string> = {
+/** The three surfaces' home pages. */
+export type SurfaceHome = '/walk' | '/desk' | '/ladder';
+
+export const homeFor: Record<Role, SurfaceHome> = {
 	admin: '/desk',
 	consultant: '/desk',
 	auditor: '/walk',
