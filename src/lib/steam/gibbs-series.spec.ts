@@ -1,0 +1,97 @@
+/**
+ * The generated straight-line series against the general evaluator in power-series.ts, from
+ * the same tables: a slip in scripts/generate-gibbs-series.ts would show here.
+ */
+import { describe, expect, it } from 'vitest';
+import {
+	DERIVATIVE_SLOTS,
+	F,
+	F_X,
+	F_XX,
+	F_XY,
+	F_Y,
+	F_YY,
+	F_YYY,
+	powerSeries,
+	seriesDerivatives,
+	seriesYDerivatives
+} from './power-series';
+import * as table2 from './region1-coefficients';
+import * as table11 from './region2-coefficients';
+import { region1SeriesInto, region1SeriesTauInto } from './region1-series.generated';
+import { region2ResidualInto, region2ResidualTauInto } from './region2-residual.generated';
+
+type Into = (x: number, y: number, out: Float64Array) => void;
+
+const cases: {
+	name: string;
+	table: { I: number[]; J: number[]; n: number[] };
+	full: Into;
+	tau: Into;
+	x: [number, number];
+	y: [number, number];
+}[] = [
+	{
+		// x = 7.1 − π for 0 ≤ p ≤ 100 MPa; y = τ − 1.222 for 273.15 K ≤ T ≤ 623.15 K.
+		name: 'region 1 (table 2)',
+		table: table2,
+		full: region1SeriesInto,
+		tau: region1SeriesTauInto,
+		x: [7.1 - 100 / 16.53, 7.1],
+		y: [1386 / 623.15 - 1.222, 1386 / 273.15 - 1.222]
+	},
+	{
+		// x = π for 1 Pa ≤ p ≤ 100 MPa; y = τ − 0.5 for 273.15 K ≤ T ≤ 1073.15 K.
+		name: 'region 2 residual (table 11)',
+		table: table11,
+		full: region2ResidualInto,
+		tau: region2ResidualTauInto,
+		x: [1e-6, 100],
+		y: [540 / 1073.15 - 0.5, 540 / 273.15 - 0.5]
+	}
+];
+
+describe('generated Gibbs series', () => {
+	for (const { name, table, full, tau, x: xs, y: ys } of cases) {
+		it(`${name}: the value and every derivative agree with the general evaluator`, () => {
+			const series = powerSeries(table.I, table.J, table.n);
+			// The same series with every coefficient positive: a scale for the rounding errors (a slip
+			// in the generator would be off by far more than 1e-13 of it).
+			const absolute = powerSeries(
+				table.I,
+				table.J,
+				table.n.map((v) => Math.abs(v))
+			);
+			const want = new Float64Array(DERIVATIVE_SLOTS);
+			const wantY = new Float64Array(DERIVATIVE_SLOTS);
+			const scale = new Float64Array(DERIVATIVE_SLOTS);
+			const scaleY = new Float64Array(DERIVATIVE_SLOTS);
+			const got = new Float64Array(DERIVATIVE_SLOTS);
+			const gotY = new Float64Array(DERIVATIVE_SLOTS);
+			let worst = 0;
+			for (let i = 0; i <= 20; i++) {
+				// Pressures spread logarithmically where x spans decades (region 2), else linearly.
+				const x =
+					xs[0] > 0 && xs[1] / xs[0] > 100
+						? xs[0] * (xs[1] / xs[0]) ** (i / 20)
+						: xs[0] + ((xs[1] - xs[0]) * i) / 20;
+				for (let j = 0; j <= 20; j++) {
+					const y = ys[0] + ((ys[1] - ys[0]) * j) / 20;
+					seriesDerivatives(series, x, y, want);
+					seriesYDerivatives(series, x, y, wantY);
+					seriesDerivatives(absolute, Math.abs(x), Math.abs(y), scale);
+					seriesYDerivatives(absolute, Math.abs(x), Math.abs(y), scaleY);
+					full(x, y, got);
+					tau(x, y, gotY);
+					for (const slot of [F, F_X, F_XX, F_Y, F_YY, F_XY]) {
+						worst = Math.max(worst, Math.abs(got[slot] - want[slot]) / Math.abs(scale[slot]));
+					}
+					for (const slot of [F, F_Y, F_YY, F_YYY]) {
+						worst = Math.max(worst, Math.abs(gotY[slot] - wantY[slot]) / Math.abs(scaleY[slot]));
+					}
+				}
+			}
+			expect(worst).toBeLessThan(1e-13);
+		});
+	}
+});
