@@ -48,6 +48,12 @@ const S1_TRY_MAX = 3.8;
 const H2_TRY_MIN = 2400;
 const S2_TRY_MIN = 4.9;
 
+/**
+ * Kelvin by which a backward equation's guess may lie outside a try's interval and still be
+ * tried: 40 times their 25 mK, and ample for the ideal-gas shift of eq. 25 below 611 Pa.
+ */
+const GUESS_MARGIN = 1;
+
 /** Extra kelvin below 1073.15 K allowed to region 5: see vapourSide. */
 const REGION5_OVERLAP = 1;
 
@@ -71,7 +77,14 @@ function valueAt(region: GibbsRegion, matched: Matched, p: number, T: number): n
 	return state[slot(matched)];
 }
 
-/** Solves in region 1 or 2 from the backward equation; null when the answer is not in [lo, hi]. */
+/**
+ * Solves in region 1 or 2 from the backward equation; null when the answer is not in [lo, hi].
+ * A first guess more than GUESS_MARGIN outside [lo, hi] is not solved for: the backward
+ * equations lie within 25 mK of the Gibbs equations wherever they apply, so the answer is not
+ * in [lo, hi] either, and the callers' boundary comparisons place it. Wet steam thus spends no
+ * evaluation proving that it is neither liquid nor vapour; states within the margin of a
+ * boundary are solved for as before, so which side of a seam they land on does not change.
+ */
 function tryRegion(
 	region: 1 | 2,
 	matched: Matched,
@@ -80,7 +93,22 @@ function tryRegion(
 	lo: number,
 	hi: number
 ): SteamState | null {
-	const T = solveTemperature(region, matched, p, y, backward(region, matched, p, y), lo, hi, state);
+	const T0 = backward(region, matched, p, y);
+	if (!(T0 >= lo - GUESS_MARGIN && T0 <= hi + GUESS_MARGIN)) return null;
+	return solveFrom(region, matched, p, y, T0, lo, hi);
+}
+
+/** Solves from first guess T0 [K]; null when the answer is not in [lo, hi]. */
+function solveFrom(
+	region: 1 | 2,
+	matched: Matched,
+	p: number,
+	y: number,
+	T0: number,
+	lo: number,
+	hi: number
+): SteamState | null {
+	const T = solveTemperature(region, matched, p, y, T0, lo, hi, state);
 	return Number.isNaN(T) ? null : singlePhaseState(p, T, state, region);
 }
 
@@ -93,7 +121,7 @@ function solveIn(
 	lo: number,
 	hi: number
 ): SteamState {
-	const found = tryRegion(region, matched, p, y, lo, hi);
+	const found = solveFrom(region, matched, p, y, backward(region, matched, p, y), lo, hi);
 	if (found === null) throw new Error(`IF97 region ${region}: no temperature found (internal)`);
 	return found;
 }
