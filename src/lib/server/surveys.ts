@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, isNotNull } from 'drizzle-orm';
+import { asc, desc, eq } from 'drizzle-orm';
 import { db } from './db';
 import { clientCompanies, sites, surveys } from './db/schema';
 
@@ -19,25 +19,4 @@ export function firmSurveys(firmId: string) {
 		.innerJoin(clientCompanies, eq(clientCompanies.id, sites.clientCompanyId))
 		.where(eq(surveys.firmId, firmId))
 		.orderBy(desc(surveys.startsOn), asc(surveys.name));
-}
-
-/** Published surveys of one client company's sites (Ladder overview). */
-export function publishedSurveysForClient(firmId: string, clientCompanyId: string) {
-	return db
-		.select({
-			id: surveys.id,
-			name: surveys.name,
-			site: sites.name,
-			publishedAt: surveys.publishedAt
-		})
-		.from(surveys)
-		.innerJoin(sites, eq(sites.id, surveys.siteId))
-		.where(
-			and(
-				eq(surveys.firmId, firmId),
-				eq(sites.clientCompanyId, clientCompanyId),
-				isNotNull(surveys.publishedAt)
-			)
-		)
-		.orderBy(desc(surveys.publishedAt));
 }
