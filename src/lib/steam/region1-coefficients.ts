@@ -1,7 +1,7 @@
 /**
  * IAPWS R7-97(2012) table 2: the coefficients and exponents of the region 1 Gibbs equation
  * γ = Σ nᵢ (7.1 − π)^Iᵢ (τ − 1.222)^Jᵢ (eq. 7). region1-series.generated.ts is written from
- * this table by scripts/generate-gibbs-series.ts; the specs check one against the other.
+ * this table by scripts/generate-if97-series.ts; the specs check one against the other.
  */
 
 export const I = [

@@ -1,6 +1,6 @@
 /**
- * The generated straight-line series against the general evaluator in power-series.ts, from
- * the same tables: a slip in scripts/generate-gibbs-series.ts would show here.
+ * The generated straight-line series (Gibbs equations of regions 1 and 2, backward equations
+ * of regions 1 and 2) against the general evaluator in power-series.ts, from the same tables: a slip in scripts/generate-if97-series.ts would show here.
  */
 import { describe, expect, it } from 'vitest';
 import {
@@ -14,12 +14,33 @@ import {
 	F_YYY,
 	powerSeries,
 	seriesDerivatives,
+	seriesValue,
 	seriesYDerivatives
 } from './power-series';
 import * as table2 from './region1-coefficients';
 import * as table11 from './region2-coefficients';
 import { region1SeriesInto, region1SeriesTauInto } from './region1-series.generated';
 import { region2ResidualInto, region2ResidualTauInto } from './region2-residual.generated';
+import { TABLE_6, TABLE_8 } from './region1-backward-coefficients';
+import {
+	TABLE_20,
+	TABLE_21,
+	TABLE_22,
+	TABLE_25,
+	TABLE_26,
+	TABLE_27
+} from './region2-backward-coefficients';
+import { region1ThetaPH, region1ThetaPS } from './region1-backward-series.generated';
+import {
+	region2aThetaPH,
+	region2bThetaPH,
+	region2cThetaPH
+} from './region2-backward-ph-series.generated';
+import {
+	region2aThetaPS,
+	region2bThetaPS,
+	region2cThetaPS
+} from './region2-backward-ps-series.generated';
 
 type Into = (x: number, y: number, out: Float64Array) => void;
 
@@ -92,6 +113,59 @@ describe('generated Gibbs series', () => {
 				}
 			}
 			expect(worst).toBeLessThan(1e-13);
+		});
+	}
+});
+
+type Value = (x: number, y: number) => number;
+
+const backward: {
+	name: string;
+	table: { I: number[]; J: number[]; n: number[] };
+	value: Value;
+	/** The table's I are multiples of 1/root; the series runs in x = π^(1/root). */
+	root?: number;
+	x: [number, number];
+	y: [number, number];
+}[] = [
+	// x and y over the ranges the callers pass (see the backward modules for the variables).
+	{ name: 'table 6', table: TABLE_6, value: region1ThetaPH, x: [0, 100], y: [0.9, 2.6] },
+	{ name: 'table 8', table: TABLE_8, value: region1ThetaPS, x: [0, 100], y: [2, 5.8] },
+	{ name: 'table 20', table: TABLE_20, value: region2aThetaPH, x: [1e-6, 4], y: [-0.85, -0.05] },
+	{ name: 'table 21', table: TABLE_21, value: region2bThetaPH, x: [2, 98], y: [-1.3, -0.5] },
+	{ name: 'table 22', table: TABLE_22, value: region2cThetaPH, x: [31.5, 125], y: [-0.55, -0.05] },
+	{
+		name: 'table 25',
+		table: TABLE_25,
+		value: region2aThetaPS,
+		root: 4,
+		x: [0.03, 1.42],
+		y: [1, 5]
+	},
+	{ name: 'table 26', table: TABLE_26, value: region2bThetaPS, x: [4, 100], y: [0.4, 2.6] },
+	{ name: 'table 27', table: TABLE_27, value: region2cThetaPS, x: [6.5, 100], y: [0, 0.28] }
+];
+
+describe('generated backward series', () => {
+	for (const { name, table, value, root = 1, x: xs, y: ys } of backward) {
+		it(`${name}: agrees with the general evaluator`, () => {
+			const I = table.I.map((e) => e * root);
+			const series = powerSeries(I, table.J, table.n);
+			const absolute = powerSeries(
+				I,
+				table.J,
+				table.n.map((v) => Math.abs(v))
+			);
+			let worst = 0;
+			for (let i = 0; i <= 20; i++) {
+				const x = xs[0] + ((xs[1] - xs[0]) * i) / 20;
+				for (let j = 0; j <= 20; j++) {
+					const y = ys[0] + ((ys[1] - ys[0]) * j) / 20;
+					const scale = seriesValue(absolute, Math.abs(x), Math.abs(y));
+					worst = Math.max(worst, Math.abs(value(x, y) - seriesValue(series, x, y)) / scale);
+				}
+			}
+			expect(worst).toBeLessThan(1e-14);
 		});
 	}
 });
