@@ -13,6 +13,7 @@ import { fileURLToPath } from 'node:url';
 import * as prettier from 'prettier';
 import * as table2 from '../src/lib/steam/region1-coefficients';
 import * as table11 from '../src/lib/steam/region2-coefficients';
+import * as table37 from '../src/lib/steam/region5-coefficients';
 import { TABLE_6, TABLE_8 } from '../src/lib/steam/region1-backward-coefficients';
 import {
 	TABLE_20,
@@ -22,7 +23,7 @@ import {
 	TABLE_26,
 	TABLE_27
 } from '../src/lib/steam/region2-backward-coefficients';
-import { gibbsFunctions, valueFunction } from './if97-series-emit';
+import { gibbsFunctions, idealFunction, valueFunction } from './if97-series-emit';
 
 interface GeneratedFile {
 	/** Relative to src/lib/steam. */
@@ -48,14 +49,41 @@ const FILES: GeneratedFile[] = [
 		})}`
 	},
 	{
-		file: 'region2-residual.generated.ts',
-		source: 'IAPWS R7-97(2012) table 11, in region2-coefficients.ts',
-		body: `${GIBBS_IMPORT}\n${gibbsFunctions({
+		file: 'region2-series.generated.ts',
+		source: 'IAPWS R7-97(2012) tables 10 and 11, in region2-coefficients.ts',
+		body: `${GIBBS_IMPORT}\n${idealFunction({
+			name: 'region2IdealInto',
+			summary: 'γ° − ln π = Σ n°ᵢ y^J°ᵢ, table 10 (eq. 16),',
+			x: '',
+			y: 'τ',
+			I: table11.J0.map(() => 0),
+			J: table11.J0,
+			n: table11.n0
+		})}\n${gibbsFunctions({
 			name: 'region2Residual',
 			summary: 'γʳ = Σ nᵢ x^Iᵢ y^Jᵢ, table 11 (eq. 17),',
 			x: 'π',
 			y: 'τ − 0.5',
 			...table11
+		})}`
+	},
+	{
+		file: 'region5-series.generated.ts',
+		source: 'IAPWS R7-97(2012) tables 37 and 38, in region5-coefficients.ts',
+		body: `${GIBBS_IMPORT}\n${idealFunction({
+			name: 'region5IdealInto',
+			summary: 'γ° − ln π = Σ n°ᵢ y^J°ᵢ, table 37 (eq. 33),',
+			x: '',
+			y: 'τ',
+			I: table37.J0.map(() => 0),
+			J: table37.J0,
+			n: table37.n0
+		})}\n${gibbsFunctions({
+			name: 'region5Residual',
+			summary: 'γʳ = Σ nᵢ x^Iᵢ y^Jᵢ, table 38 (eq. 34),',
+			x: 'π',
+			y: 'τ',
+			...table37
 		})}`
 	},
 	{

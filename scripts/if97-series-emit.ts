@@ -92,14 +92,16 @@ function xExponents(s: Series): number[] {
 function terms(s: Series): string[] {
 	const I = xExponents(s);
 	if (!s.J.every(Number.isInteger)) throw new Error(`${s.name}: J must be integers`);
-	const shown = (k: number) => (s.root ? `I = ${s.I[k]} (x^${I[k]})` : `I = ${I[k]}`);
+	const ideal = I.every((e) => e === 0);
+	const shown = (k: number) =>
+		ideal ? '' : s.root ? `I = ${s.I[k]} (x^${I[k]}), ` : `I = ${I[k]}, `;
 	return [
 		...powers('x', I),
 		...powers('y', s.J),
 		...s.n.map((n, k) => {
 			const J = s.J[k];
 			const factor = J === 0 ? '' : ` * ${power('y', J)}`;
-			return `const c${k + 1} = ${releaseStyle(n)}${factor}; // ${shown(k)}, J = ${J}`;
+			return `const c${k + 1} = ${releaseStyle(n)}${factor}; // ${shown(k)}J = ${J}`;
 		})
 	];
 }
@@ -124,12 +126,8 @@ function groupSums(s: Series, weights: [string, (J: number) => number][]): strin
 	const lines: string[] = [];
 	for (const { e, rows } of groups(s)) {
 		for (const [prefix, w] of weights) {
-			const parts = rows.flatMap(({ i, J }) => {
-				const k = w(J);
-				return k === 0 ? [] : [k === 1 ? `c${i}` : `${k} * c${i}`];
-			});
-			if (parts.length === 0) continue;
-			const inner = parts.join(' + ');
+			const inner = signedSum(rows.map(({ i, J }) => [w(J), `c${i}`]));
+			if (inner === '0') continue;
 			const scaled = e === 0 ? inner : `${power('x', e)} * (${inner})`;
 			lines.push(`const ${groupName(prefix, e)} = ${scaled};`);
 		}
@@ -140,13 +138,23 @@ function groupSums(s: Series, weights: [string, (J: number) => number][]): strin
 /** Σ over groups of k(e)·<prefix>e, leaving out groups without that sum or with k = 0. */
 function total(s: Series, prefix: string, k: (e: number) => number, lines: string[]): string {
 	const declared = new Set(lines.flatMap((l) => /^const (\w+)/.exec(l)?.slice(1) ?? []));
-	const parts = groups(s).flatMap(({ e }) => {
-		const name = groupName(prefix, e);
-		const w = k(e);
-		if (w === 0 || !declared.has(name)) return [];
-		return [w === 1 ? name : `${w} * ${name}`];
-	});
-	return parts.length === 0 ? '0' : parts.join(' + ');
+	return signedSum(
+		groups(s).map(({ e }): [number, string] => {
+			const name = groupName(prefix, e);
+			return [declared.has(name) ? k(e) : 0, name];
+		})
+	);
+}
+
+/** Σ wᵢ·nameᵢ as source, e.g. 'c2 - 3 * c3 + 2 * c6', leaving out zero weights. */
+function signedSum(parts: [number, string][]): string {
+	let text = '';
+	for (const [w, name] of parts) {
+		if (w === 0) continue;
+		const term = Math.abs(w) === 1 ? name : `${Math.abs(w)} * ${name}`;
+		text += text === '' ? (w < 0 ? `-${term}` : term) : w < 0 ? ` - ${term}` : ` + ${term}`;
+	}
+	return text === '' ? '0' : text;
 }
 
 const one = () => 1;
@@ -194,7 +202,8 @@ export function gibbsFunctions(s: Series): string {
 	];
 	return `
 /**
- * ${s.summary} with x = ${s.x}, y = ${s.y}, and its first and second partial derivatives,
+ * ${s.summary}
+ * with x = ${s.x} and y = ${s.y}, and its first and second partial derivatives,
  * into out[F], out[F_X], out[F_XX], out[F_Y], out[F_YY], out[F_XY]. s, t and u sum each group of
  * rows of equal I weighted by 1, J and J(J − 1); the x-derivatives weight the groups by I and
  * I(I − 1). The weights bring down one power of the variable, divided out once at the end, so
@@ -224,5 +233,36 @@ export function ${s.name}TauInto(x: number, y: number, out: Float64Array): void 
 	out[F_Y] = (${total(s, 't', one, tau)}) * ry;
 	out[F_YY] = (${total(s, 'u', one, tau)}) * ry * ry;
 	out[F_YYY] = (${total(s, 'v', one, tau)}) * ry * ry * ry;
+}`;
+}
+
+/**
+ * A series in y alone (the ideal-gas parts of regions 2 and 5, all Iᵢ = 0) with its first three
+ * derivatives, into out[F], out[F_Y], out[F_YY], out[F_YYY].
+ */
+export function idealFunction(s: Series): string {
+	if (s.I.some((I) => I !== 0)) throw new Error(`${s.name}: an ideal-gas part has no x`);
+	const body = [
+		...terms(s),
+		...groupSums(s, [
+			['s', one],
+			['t', first],
+			['u', second],
+			['v', third]
+		])
+	];
+	return `
+/**
+ * ${s.summary}
+ * with y = ${s.y}, and its first three derivatives, into out[F], out[F_Y], out[F_YY], out[F_YYY];
+ * s, t, u, v sum the rows weighted by 1, J, J(J − 1), J(J − 1)(J − 2).
+ */
+export function ${s.name}(y: number, out: Float64Array): void {
+	${body.join('\n')}
+	const ry = 1 / y;
+	out[F] = ${total(s, 's', one, body)};
+	out[F_Y] = (${total(s, 't', one, body)}) * ry;
+	out[F_YY] = (${total(s, 'u', one, body)}) * ry * ry;
+	out[F_YYY] = (${total(s, 'v', one, body)}) * ry * ry * ry;
 }`;
 }

@@ -1,5 +1,5 @@
 /**
- * The generated straight-line series (Gibbs equations of regions 1 and 2, backward equations
+ * The generated straight-line series (Gibbs equations of regions 1, 2 and 5, backward equations
  * of regions 1 and 2) against the general evaluator in power-series.ts, from the same tables: a slip in scripts/generate-if97-series.ts would show here.
  */
 import { describe, expect, it } from 'vitest';
@@ -19,8 +19,18 @@ import {
 } from './power-series';
 import * as table2 from './region1-coefficients';
 import * as table11 from './region2-coefficients';
+import * as table37 from './region5-coefficients';
 import { region1SeriesInto, region1SeriesTauInto } from './region1-series.generated';
-import { region2ResidualInto, region2ResidualTauInto } from './region2-residual.generated';
+import {
+	region2IdealInto,
+	region2ResidualInto,
+	region2ResidualTauInto
+} from './region2-series.generated';
+import {
+	region5IdealInto,
+	region5ResidualInto,
+	region5ResidualTauInto
+} from './region5-series.generated';
 import { TABLE_6, TABLE_8 } from './region1-backward-coefficients';
 import {
 	TABLE_20,
@@ -69,6 +79,15 @@ const cases: {
 		tau: region2ResidualTauInto,
 		x: [1e-6, 100],
 		y: [540 / 1073.15 - 0.5, 540 / 273.15 - 0.5]
+	},
+	{
+		// x = π for p ≤ 50 MPa; y = τ for 1073.15 K ≤ T ≤ 2273.15 K.
+		name: 'region 5 residual (table 38)',
+		table: table37,
+		full: region5ResidualInto,
+		tau: region5ResidualTauInto,
+		x: [1e-6, 50],
+		y: [1000 / 2273.15, 1000 / 1073.15]
 	}
 ];
 
@@ -166,6 +185,33 @@ describe('generated backward series', () => {
 				}
 			}
 			expect(worst).toBeLessThan(1e-14);
+		});
+	}
+});
+
+describe('generated ideal-gas parts', () => {
+	const parts = [
+		{ name: 'region 2 (table 10)', J: table11.J0, n: table11.n0, into: region2IdealInto },
+		{ name: 'region 5 (table 37)', J: table37.J0, n: table37.n0, into: region5IdealInto }
+	];
+	for (const { name, J, n, into } of parts) {
+		it(`${name}: the term-by-term sums with Math.pow, and their first three τ-derivatives`, () => {
+			const out = new Float64Array(DERIVATIVE_SLOTS);
+			// The k-th derivative of Σ n τ^J: Σ n J(J − 1)…(J − k + 1) τ^(J − k).
+			const derivative = (tau: number, k: number) =>
+				J.reduce((sum, e, i) => {
+					let weight = 1;
+					for (let m = 0; m < k; m++) weight *= e - m;
+					return sum + n[i] * weight * tau ** (e - k);
+				}, 0);
+			// τ over regions 2 (540/1073.15 … 540/273.15) and 5 (1000/2273.15 … 1000/1073.15).
+			for (const tau of [0.44, 0.5, 0.93, 1.3, 1.98]) {
+				into(tau, out);
+				expect(out[F] / derivative(tau, 0) - 1).toBeCloseTo(0, 13);
+				expect(out[F_Y] / derivative(tau, 1) - 1).toBeCloseTo(0, 13);
+				expect(out[F_YY] / derivative(tau, 2) - 1).toBeCloseTo(0, 12);
+				expect(out[F_YYY] / derivative(tau, 3) - 1).toBeCloseTo(0, 12);
+			}
 		});
 	}
 });

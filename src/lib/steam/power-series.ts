@@ -1,11 +1,13 @@
 /**
- * Evaluators for the double power series Σ nᵢ · x^Iᵢ · y^Jᵢ that make up the IF97 equations.
- * They run millions of times a second, so they allocate nothing and form each power they need
- * once, by multiplication along a short recipe (no Math.pow per term).
+ * The general evaluator of the double power series Σ nᵢ · x^Iᵢ · y^Jᵢ that make up the IF97
+ * equations, and the slots its derivatives are written to. The engine itself evaluates every
+ * series through straight-line code generated from the release's tables
+ * (scripts/generate-if97-series.ts, *.generated.ts), several times faster; this evaluator reads
+ * the same tables as data and is the independent reference the specs check that code against.
  *
- * A series is plain data (typed arrays in an object of one fixed shape) read by one module
- * function for all series. V8 then compiles a single fast loop that serves every region; with
- * a closure or a class per series it ran two to three times slower here.
+ * It allocates nothing and forms each power it needs once, by multiplication along a short
+ * recipe (no Math.pow per term). A series is plain data (typed arrays in an object of one
+ * fixed shape) read by one module function for all series.
  */
 
 /**

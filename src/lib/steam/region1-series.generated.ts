@@ -9,7 +9,8 @@
 import { F, F_X, F_XX, F_XY, F_Y, F_YY, F_YYY } from './power-series';
 
 /**
- * γ = Σ nᵢ x^Iᵢ y^Jᵢ, table 2 (eq. 7), with x = 7.1 − π, y = τ − 1.222, and its first and second partial derivatives,
+ * γ = Σ nᵢ x^Iᵢ y^Jᵢ, table 2 (eq. 7),
+ * with x = 7.1 − π and y = τ − 1.222, and its first and second partial derivatives,
  * into out[F], out[F_X], out[F_XX], out[F_Y], out[F_YY], out[F_XY]. s, t and u sum each group of
  * rows of equal I weighted by 1, J and J(J − 1); the x-derivatives weight the groups by I and
  * I(I − 1). The weights bring down one power of the variable, divided out once at the end, so
@@ -91,10 +92,10 @@ export function region1SeriesInto(x: number, y: number, out: Float64Array): void
 	const c33 = 0.18228094581404e-23 * ym40; // I = 31, J = -40
 	const c34 = -0.93537087292458e-25 * ym41; // I = 32, J = -41
 	const s0 = c1 + c2 + c3 + c4 + c5 + c6 + c7 + c8;
-	const t0 = -2 * c1 + -1 * c2 + c4 + 2 * c5 + 3 * c6 + 4 * c7 + 5 * c8;
+	const t0 = -2 * c1 - c2 + c4 + 2 * c5 + 3 * c6 + 4 * c7 + 5 * c8;
 	const u0 = 6 * c1 + 2 * c2 + 2 * c5 + 6 * c6 + 12 * c7 + 20 * c8;
 	const s1 = x * (c9 + c10 + c11 + c12 + c13 + c14);
-	const t1 = x * (-9 * c9 + -7 * c10 + -1 * c11 + c13 + 3 * c14);
+	const t1 = x * (-9 * c9 - 7 * c10 - c11 + c13 + 3 * c14);
 	const u1 = x * (90 * c9 + 56 * c10 + 2 * c11 + 6 * c14);
 	const s2 = x2 * (c15 + c16 + c17 + c18 + c19);
 	const t2 = x2 * (-3 * c15 + c17 + 3 * c18 + 17 * c19);
@@ -103,13 +104,13 @@ export function region1SeriesInto(x: number, y: number, out: Float64Array): void
 	const t3 = x3 * (-4 * c20 + 6 * c22);
 	const u3 = x3 * (20 * c20 + 30 * c22);
 	const s4 = x4 * (c23 + c24 + c25);
-	const t4 = x4 * (-5 * c23 + -2 * c24 + 10 * c25);
+	const t4 = x4 * (-5 * c23 - 2 * c24 + 10 * c25);
 	const u4 = x4 * (30 * c23 + 6 * c24 + 90 * c25);
 	const s5 = x5 * c26;
 	const t5 = x5 * (-8 * c26);
 	const u5 = x5 * (72 * c26);
 	const s8 = x8 * (c27 + c28);
-	const t8 = x8 * (-11 * c27 + -6 * c28);
+	const t8 = x8 * (-11 * c27 - 6 * c28);
 	const u8 = x8 * (132 * c27 + 42 * c28);
 	const s21 = x21 * c29;
 	const t21 = x21 * (-29 * c29);
@@ -260,13 +261,13 @@ export function region1SeriesTauInto(x: number, y: number, out: Float64Array): v
 	const c33 = 0.18228094581404e-23 * ym40; // I = 31, J = -40
 	const c34 = -0.93537087292458e-25 * ym41; // I = 32, J = -41
 	const s0 = c1 + c2 + c3 + c4 + c5 + c6 + c7 + c8;
-	const t0 = -2 * c1 + -1 * c2 + c4 + 2 * c5 + 3 * c6 + 4 * c7 + 5 * c8;
+	const t0 = -2 * c1 - c2 + c4 + 2 * c5 + 3 * c6 + 4 * c7 + 5 * c8;
 	const u0 = 6 * c1 + 2 * c2 + 2 * c5 + 6 * c6 + 12 * c7 + 20 * c8;
-	const v0 = -24 * c1 + -6 * c2 + 6 * c6 + 24 * c7 + 60 * c8;
+	const v0 = -24 * c1 - 6 * c2 + 6 * c6 + 24 * c7 + 60 * c8;
 	const s1 = x * (c9 + c10 + c11 + c12 + c13 + c14);
-	const t1 = x * (-9 * c9 + -7 * c10 + -1 * c11 + c13 + 3 * c14);
+	const t1 = x * (-9 * c9 - 7 * c10 - c11 + c13 + 3 * c14);
 	const u1 = x * (90 * c9 + 56 * c10 + 2 * c11 + 6 * c14);
-	const v1 = x * (-990 * c9 + -504 * c10 + -6 * c11 + 6 * c14);
+	const v1 = x * (-990 * c9 - 504 * c10 - 6 * c11 + 6 * c14);
 	const s2 = x2 * (c15 + c16 + c17 + c18 + c19);
 	const t2 = x2 * (-3 * c15 + c17 + 3 * c18 + 17 * c19);
 	const u2 = x2 * (12 * c15 + 6 * c18 + 272 * c19);
@@ -276,17 +277,17 @@ export function region1SeriesTauInto(x: number, y: number, out: Float64Array): v
 	const u3 = x3 * (20 * c20 + 30 * c22);
 	const v3 = x3 * (-120 * c20 + 120 * c22);
 	const s4 = x4 * (c23 + c24 + c25);
-	const t4 = x4 * (-5 * c23 + -2 * c24 + 10 * c25);
+	const t4 = x4 * (-5 * c23 - 2 * c24 + 10 * c25);
 	const u4 = x4 * (30 * c23 + 6 * c24 + 90 * c25);
-	const v4 = x4 * (-210 * c23 + -24 * c24 + 720 * c25);
+	const v4 = x4 * (-210 * c23 - 24 * c24 + 720 * c25);
 	const s5 = x5 * c26;
 	const t5 = x5 * (-8 * c26);
 	const u5 = x5 * (72 * c26);
 	const v5 = x5 * (-720 * c26);
 	const s8 = x8 * (c27 + c28);
-	const t8 = x8 * (-11 * c27 + -6 * c28);
+	const t8 = x8 * (-11 * c27 - 6 * c28);
 	const u8 = x8 * (132 * c27 + 42 * c28);
-	const v8 = x8 * (-1716 * c27 + -336 * c28);
+	const v8 = x8 * (-1716 * c27 - 336 * c28);
 	const s21 = x21 * c29;
 	const t21 = x21 * (-29 * c29);
 	const u21 = x21 * (870 * c29);

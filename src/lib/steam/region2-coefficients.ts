@@ -1,6 +1,6 @@
 /**
  * IAPWS R7-97(2012) tables 10 and 11: the coefficients and exponents of the region 2 Gibbs
- * equation γ = γ° + γʳ (eqs. 15–17). region2-residual.generated.ts is written from table 11
+ * equation γ = γ° + γʳ (eqs. 15–17). region2-series.generated.ts is written from them
  * by scripts/generate-if97-series.ts; the specs check one against the other.
  */
 

@@ -1,16 +1,19 @@
 /**
  * IF97 region 2, vapour: the Gibbs free energy equation as ideal-gas part plus residual part
- * (IAPWS R7-97(2012) eqs. 15–17, coefficients tables 10 and 11, relations table 12).
+ * (IAPWS R7-97(2012) eqs. 15–17, coefficients tables 10 and 11, relations table 12). The
+ * series are generated from the tables (region2-coefficients.ts) by
+ * scripts/generate-if97-series.ts.
  */
 import { R } from './constants';
 import { CP, CP_T, CV, H, S, U, V, W, propertiesBuffer, toProperties } from './properties-buffer';
 import { DERIVATIVE_SLOTS, F, F_X, F_XX, F_XY, F_Y, F_YY, F_YYY } from './power-series';
-import { idealCoefficients, idealGasInto } from './ideal-gas';
-import { J0, n0 } from './region2-coefficients';
-import { region2ResidualInto, region2ResidualTauInto } from './region2-residual.generated';
+import {
+	region2IdealInto,
+	region2ResidualInto,
+	region2ResidualTauInto
+} from './region2-series.generated';
 import type { Properties } from './types';
 
-const ideal = idealCoefficients(J0, n0);
 const g0 = new Float64Array(DERIVATIVE_SLOTS);
 const gr = new Float64Array(DERIVATIVE_SLOTS);
 
@@ -53,7 +56,7 @@ export function idealPlusResidualInto(
 export function region2Into(p: number, T: number, out: Float64Array): void {
 	const pi = p;
 	const tau = 540 / T;
-	idealGasInto(ideal, tau, g0);
+	region2IdealInto(tau, g0);
 	region2ResidualInto(pi, tau - 0.5, gr);
 	idealPlusResidualInto(p, T, pi, tau, g0, gr, out);
 }
@@ -83,7 +86,7 @@ export function idealPlusResidualHsCpInto(
 /** Only h, s, cp and dcp/dT of region 2 at p [MPa], T [K] into slots H, S, CP, CP_T. */
 export function region2HsCpInto(p: number, T: number, out: Float64Array): void {
 	const tau = 540 / T;
-	idealGasInto(ideal, tau, g0);
+	region2IdealInto(tau, g0);
 	region2ResidualTauInto(p, tau - 0.5, gr);
 	idealPlusResidualHsCpInto(T, p, tau, g0, gr, out);
 }
