@@ -44,6 +44,27 @@ describe('orificeSteamFlow', () => {
 		expect(isentropicMassFlux(up, pc * 1.001) / peak).toBeGreaterThan(0.9999);
 	});
 
+	it('finds the peak to well within 1e-4 of its pressure, dry, wet, superheated or saturated liquid', () => {
+		for (const up of [
+			upstreamState(1.1),
+			upstreamState(15, undefined, 0.2),
+			upstreamState(1, undefined, 0),
+			upstreamState(4.1, 673.15),
+			upstreamState(0.002)
+		]) {
+			const pc = criticalPressure(up);
+			const peak = isentropicMassFlux(up, pc);
+			expect(isentropicMassFlux(up, pc * (1 + 1e-4))).toBeLessThan(peak);
+			expect(isentropicMassFlux(up, pc * (1 - 1e-4))).toBeLessThan(peak);
+		}
+	});
+
+	it('stops at the lowest throat pressure searched (612 Pa) when the flux still rises there', () => {
+		// 0.8 kPa superheated steam: its peak ratio (≈ 0.55) lies below 612/800.
+		const up = upstreamState(0.0008, 400);
+		expect(criticalPressure(up)).toBe(0.000612);
+	});
+
 	it('passes less superheated steam and more wet steam than dry saturated at one pressure', () => {
 		const dry = orificeSteamFlow(base).massFlow;
 		const hot = orificeSteamFlow({ ...base, T1: saturationTemperature(base.p1) + 100 }).massFlow;
