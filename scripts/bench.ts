@@ -1,7 +1,8 @@
 /**
  * `npm run bench`: evaluations per second of the steam engine, single-threaded, beside the same
  * operations through Debian's python3-iapws (scripts/bench_iapws.py), with the targets of the
- * engine's issue. Benchmarks print figures; tests never time things.
+ * engine's issue; then the loss engine's orifice flow and finding evaluation (bench-losses.ts),
+ * which have no python counterpart. Benchmarks print figures; tests never time things.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
 import { availableParallelism, loadavg } from 'node:os';
@@ -14,6 +15,7 @@ import {
 } from '../src/lib/steam/index';
 import { heapFigures, heapUsed } from './bench-heap';
 import { benchInputs, type BenchInputs, type Operation } from './bench-inputs';
+import { lossRows, type LossRow } from './bench-losses';
 
 const WARM_UP_S = 0.5;
 const MEASURE_S = 3;
@@ -93,13 +95,13 @@ const cpuSeconds = () => {
  * not read per call. CPU time is what the table shows: on a shared machine other work steals
  * wall-clock time from both sides unevenly, while CPU time stays the cost of the operation.
  */
-function rate(pass: Pass, a: Float64Array, b: Float64Array, seconds: number) {
+function rate(pass: () => number, calls: number, seconds: number) {
 	let count = 0;
 	const wall = performance.now();
 	const cpu = cpuSeconds();
 	for (;;) {
-		sink += pass(a, b);
-		count += a.length;
+		sink += pass();
+		count += calls;
 		const used = cpuSeconds() - cpu;
 		if (used >= seconds)
 			return { cpu: count / used, wall: count / ((performance.now() - wall) / 1000) };
@@ -137,7 +139,7 @@ function si(n: number): string {
 const verdict = (ok: boolean) => (ok ? 'pass' : 'FAIL');
 const row = (name: string, ...rest: string[]) => {
 	const numbers = rest.slice(0, 3).map((c) => c.padStart(12));
-	return `${name.padEnd(24)}${numbers.join('')}  ${rest[3]}`.trimEnd();
+	return `${name.padEnd(28)}${numbers.join('')}  ${rest[3]}`.trimEnd();
 };
 
 /** The side-by-side table: evaluations per CPU second, the ratio, and the issue's targets. */
@@ -174,31 +176,55 @@ function table(ours: { cpu: Rates; wall: Rates }, python: PythonRates | null): s
 	return lines;
 }
 
+interface Timed {
+	run: () => number;
+	calls: number;
+}
+
+/** The loss-engine rows: calls per CPU second (and wall-clock second), against their targets. */
+function lossTable(rows: (LossRow & Timed)[]): string[] {
+	const lines = [
+		'',
+		'loss engine, no python counterpart (calls per CPU second, and per wall-clock second):',
+		row('operation', 'Steamwisp/s', 'wall/s', '', 'targets')
+	];
+	for (const { label, calls, target, run } of rows) {
+		const { cpu, wall } = rate(run, calls, MEASURE_S);
+		const goal = target ? `≥ ${si(target)}/s ${verdict(cpu >= target)}` : '';
+		lines.push(row(label, si(cpu), si(wall), '', goal));
+	}
+	return lines;
+}
+
 function main(): void {
 	const inputs = benchInputs();
+	const engine = ROWS.map(({ op, pass }) => {
+		const { a, b } = inputs[op];
+		return { op, run: () => pass(a, b), calls: a.length };
+	});
+	const loss = lossRows().map((r) => ({ ...r, run: r.pass }));
 	const startHeap = heapUsed();
+	// Every operation is warmed up before any is timed, so each is timed as a long-running
+	// server runs it: compiled with feedback from all paths, young generation grown to its size.
+	for (const { run, calls } of [...engine, ...loss]) rate(run, calls, WARM_UP_S);
 	const ours = { cpu: {} as Rates, wall: {} as Rates };
-	for (const { op, pass } of ROWS) {
-		rate(pass, inputs[op].a, inputs[op].b, WARM_UP_S);
-		({ cpu: ours.cpu[op], wall: ours.wall[op] } = rate(
-			pass,
-			inputs[op].a,
-			inputs[op].b,
-			MEASURE_S
-		));
+	for (const { op, run, calls } of engine) {
+		({ cpu: ours.cpu[op], wall: ours.wall[op] } = rate(run, calls, MEASURE_S));
 	}
+	const losses = lossTable(loss);
 	const memory = heapFigures(startHeap);
 	const python = pythonRates(inputs);
 	const load = loadavg()[0].toFixed(1);
 	console.log(
 		[
-			`Node ${process.version}, one thread, ${MEASURE_S} CPU-seconds per operation after ${WARM_UP_S} s warm-up;`,
+			`Node ${process.version}, one thread, ${MEASURE_S} CPU-seconds per operation, all warmed up ${WARM_UP_S} s each first;`,
 			`load average ${load} on ${availableParallelism()} CPUs (rates are per CPU second of this process)`,
 			python
 				? `beside ${python.library} (IAPWS-IF97): its public IAPWS97() calls (saturationTemperature: IAPWS97(P, x=0).T)`
 				: 'python3-iapws not found (apt-get install -y python3-iapws): engine figures only',
 			'',
 			...table(ours, python),
+			...losses,
 			'',
 			...memory,
 			`(checksum ${sink.toPrecision(6)})`
