@@ -14,8 +14,8 @@ sql() { mariadb --no-defaults --socket="$DB_SOCKET" -u"$SOCK_USER" -e "$1"; }
 running() { [ -S "$DB_SOCKET" ] && admin ping >/dev/null 2>&1; }
 
 ensure_installed() {
-	command -v mariadbd >/dev/null 2>&1 || apt_install "MariaDB server (mariadbd)" mariadb-server
-	command -v mariadb-install-db >/dev/null 2>&1 || apt_install "mariadb-install-db" mariadb-server
+	command -v mariadbd >/dev/null 2>&1 || apt_install "the MariaDB server (mariadbd)" mariadb-server
+	command -v mariadb-install-db >/dev/null 2>&1 || apt_install "the MariaDB set-up tool (mariadb-install-db)" mariadb-server
 }
 
 initialise() {

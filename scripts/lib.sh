@@ -38,7 +38,7 @@ apt_install() {
 		die "$why is missing. Install it from Debian's packages, then run this again:
     sudo apt-get update && sudo apt-get install -y $*"
 	fi
-	say "installing $* from Debian's packages ($why)…"
+	say "$why is missing: installing $* from Debian's packages…"
 	export DEBIAN_FRONTEND=noninteractive
 	# Package lists may be empty or stale on a fresh machine.
 	if ! apt-get install -y -q -o DPkg::Lock::Timeout=600 "$@" >"$DATA_DIR/apt.log" 2>&1; then

@@ -33,8 +33,8 @@ stage() {
 }
 
 set -e
-command -v chromium >/dev/null 2>&1 || apt_install "Chromium (for browser tests)" chromium
-/usr/bin/python3 -c 'import iapws' >/dev/null 2>&1 || apt_install "python3-iapws (reference library)" python3-iapws
+command -v chromium >/dev/null 2>&1 || apt_install "the browser for end-to-end tests (chromium)" chromium
+/usr/bin/python3 -c 'import iapws' >/dev/null 2>&1 || apt_install "the reference steam library (python3-iapws)" python3-iapws
 ensure_node_modules
 db_was_running=0
 bash scripts/db.sh status >/dev/null 2>&1 && db_was_running=1
