@@ -4,7 +4,12 @@
  * like them. The site and findings are demo data in the shapes the app stores.
  */
 import type { Finding } from '../src/lib/schemas/finding';
-import type { CostBasis, Header } from '../src/lib/schemas/site';
+import {
+	findingCommon as common,
+	lossSite as site,
+	mainsHeader as mains,
+	superheatedHeader as superheated
+} from '../tests/fixtures/loss-site.ts';
 import {
 	evaluateFinding,
 	orificeSteamFlow,
@@ -44,43 +49,6 @@ function orificeInputs(): OrificeInput[] {
 	}
 	return inputs;
 }
-
-const mains: Header = {
-	id: '6c1a8c56-94a7-4f55-b4a6-3a3d1f0d2b11',
-	name: 'Main 10 bar',
-	pressure: 1.101325
-};
-const superheated: Header = {
-	id: 'f0e1d2c3-b4a5-4687-9a1b-2c3d4e5f6a7b',
-	name: 'HP superheated',
-	pressure: 4.101325,
-	designTemperature: 673.15
-};
-const costBasis: CostBasis = {
-	fuel: { kind: 'natural-gas', price: '9.00', unit: 'GJ' },
-	currency: 'EUR',
-	boilerEfficiency: 0.8,
-	feedwaterTemperature: 378.15,
-	condensateReturnFraction: 0.6,
-	makeupWaterPrice: '1.50',
-	waterTreatmentPrice: '0.70',
-	operatingHours: 8000,
-	discountRate: 0.08,
-	lifeYears: 5
-};
-const site = { costBasis, headers: [mains, superheated] };
-
-const common = {
-	id: '3d6f1a9e-2b4c-4e8f-9a1b-7c5d3e2f1a0b',
-	surveyId: '8a2b4c6d-1e3f-4a5b-8c7d-9e0f1a2b3c4d',
-	location: 'Dryer hall',
-	notes: '',
-	status: 'draft' as const,
-	version: 1,
-	createdAt: '2025-03-04T09:15:00.000Z',
-	updatedAt: '2025-03-04T09:15:00.000Z',
-	deleted: false
-};
 
 /** Traps failed open or leaking, to atmosphere or a return, on both headers. */
 function traps(): Finding[] {
