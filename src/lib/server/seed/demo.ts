@@ -4,6 +4,7 @@
  * Ids are fixed so seeding twice changes nothing.
  */
 import type { Role } from '../../schemas/roles';
+import { atmosphericPressureAtElevation, toBase } from '../../units/index';
 
 export const demoPassword = 'steam-demo-2026';
 
@@ -107,8 +108,14 @@ export const demoUsers: DemoUser[] = [
 	}
 ];
 
-/** MPa absolute from bar gauge at standard atmosphere (demo data only). */
-const barg = (bar: number) => (bar * 1e5 + 101_325) / 1e6;
+/** MPa absolute from a gauge reading in bar at a site's elevation. */
+const barg = (bar: number, elevation: number) =>
+	toBase('pressure', bar, 'bar_g', {
+		atmosphericPressure: atmosphericPressureAtElevation(elevation)
+	});
+
+const millbeckElevation = 85;
+const orrinElevation = 240;
 
 export const demoSites = [
 	{
@@ -117,24 +124,24 @@ export const demoSites = [
 		clientCompanyId: demoClients[0].id,
 		name: 'Millbeck Creamery',
 		address: 'Creamery Lane 4, Millbeck (invented)',
-		elevation: 85,
+		elevation: millbeckElevation,
 		headers: [
 			{
 				id: '5e7a0005-0000-4000-8000-000000000001',
 				name: 'HP boiler header',
-				pressure: barg(10),
+				pressure: barg(10, millbeckElevation),
 				sortOrder: 1
 			},
 			{
 				id: '5e7a0005-0000-4000-8000-000000000002',
 				name: 'Process (evaporators)',
-				pressure: barg(7),
+				pressure: barg(7, millbeckElevation),
 				sortOrder: 2
 			},
 			{
 				id: '5e7a0005-0000-4000-8000-000000000003',
 				name: 'CIP and space heating',
-				pressure: barg(3),
+				pressure: barg(3, millbeckElevation),
 				sortOrder: 3
 			}
 		]
@@ -145,18 +152,18 @@ export const demoSites = [
 		clientCompanyId: demoClients[1].id,
 		name: 'Orrin Valley No. 2 Mill',
 		address: 'River Road, Orrin Valley (invented)',
-		elevation: 240,
+		elevation: orrinElevation,
 		headers: [
 			{
 				id: '5e7a0005-0000-4000-8000-000000000011',
 				name: 'Dryer section',
-				pressure: barg(11),
+				pressure: barg(11, orrinElevation),
 				sortOrder: 1
 			},
 			{
 				id: '5e7a0005-0000-4000-8000-000000000012',
 				name: 'Low-pressure',
-				pressure: barg(3.5),
+				pressure: barg(3.5, orrinElevation),
 				sortOrder: 2
 			}
 		]

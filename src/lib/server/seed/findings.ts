@@ -5,10 +5,11 @@
  * server uses for synced findings.
  */
 import type { CostBasis } from '../../schemas/site';
+import { toBase } from '../../units/index';
 import { demoSites } from './demo';
 
-const K = (celsius: number) => celsius + 273.15;
-const mm = (millimetres: number) => millimetres / 1000;
+const K = (celsius: number) => toBase('temperature', celsius, 'degC');
+const mm = (millimetres: number) => toBase('shortLength', millimetres, 'mm');
 
 export const millbeckCostBasis: CostBasis = {
 	fuel: { kind: 'natural-gas', price: '11.20', unit: 'GJ' },
