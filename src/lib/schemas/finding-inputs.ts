@@ -20,7 +20,7 @@ const operatingHoursSchema = z
 	.max(8784, { error: 'Operating hours cannot exceed 8784 h per year (a leap year)' });
 
 /** A diameter in metres, > 0 and at most `max` m. */
-const diameter = (label: string, max: number) =>
+export const diameterSchema = (label: string, max: number) =>
 	z
 		.number({ error: `${label} must be a number (metres)` })
 		.positive({ error: `${label} must be greater than 0 m` })
@@ -38,7 +38,7 @@ export const trapInputsSchema = z
 		/** Nominal connection size (DN); sets the default discharge orifice. */
 		dn: dnSchema,
 		/** Discharge orifice diameter, m; defaults from the size and type table when absent. */
-		orificeDiameter: diameter('Orifice diameter', 0.05).optional(),
+		orificeDiameter: diameterSchema('Orifice diameter', 0.05).optional(),
 		condition: z.enum(TRAP_CONDITIONS, oneOf('Trap condition', TRAP_CONDITIONS)),
 		discharge: z.enum(TRAP_DISCHARGES, oneOf('Discharge', TRAP_DISCHARGES)),
 		/** Pressure the trap discharges into, MPa absolute; required for a condensate return. */
@@ -67,7 +67,7 @@ export type TrapInputs = z.infer<typeof trapInputsSchema>;
 export const leakInputsSchema = z
 	.object({
 		/** Equivalent hole diameter, m: the round hole that would pass the same steam. */
-		holeDiameter: diameter('Hole diameter', 0.1).optional(),
+		holeDiameter: diameterSchema('Hole diameter', 0.1).optional(),
 		/** A size class chosen from the guidance when the hole cannot be measured. */
 		sizeClass: z.enum(LEAK_SIZE_CLASSES, oneOf('Leak size class', LEAK_SIZE_CLASSES)).optional(),
 		operatingHours: operatingHoursSchema.optional()
@@ -114,7 +114,7 @@ export const insulationInputsSchema = z
 		/** Nominal pipe size (DN) of the pipe, valve or flange pair. */
 		dn: dnSchema.optional(),
 		/** Bare outside diameter, m, when it is not a standard pipe size (wins over dn). */
-		outerDiameter: diameter('Outer diameter', 3).optional(),
+		outerDiameter: diameterSchema('Outer diameter', 3).optional(),
 		/** Bare length, m (pipe). */
 		length: z
 			.number({ error: 'Length must be a number (metres)' })
