@@ -68,6 +68,28 @@ export const headers = mysqlTable(
 );
 
 /**
+ * The plant's own names for where things are (boiler house, evaporator hall…): findings and
+ * assets point at one, so the Walk can go area by area and the Desk can group by them.
+ */
+export const areas = mysqlTable(
+	'areas',
+	{
+		id: id(),
+		siteId: uuid('site_id')
+			.notNull()
+			.references(() => sites.id),
+		name: varchar('name', { length: 120 }).notNull(),
+		sortOrder: int('sort_order').notNull().default(0),
+		retiredAt: at('retired_at'),
+		version: version(),
+		changeSeq: changeSeq(),
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
+	},
+	(t) => [uniqueIndex('areas_site_name_uq').on(t.siteId, t.name)]
+);
+
+/**
  * Equipment that outlives one survey: a steam trap keeps its tag from survey to survey, so
  * a later survey can confirm a repair (the "verified" step of a finding's lifecycle).
  */
@@ -83,6 +105,7 @@ export const assets = mysqlTable(
 		tag: varchar('tag', { length: 64 }).notNull(),
 		location: varchar('location', { length: 255 }),
 		headerId: uuid('header_id').references(() => headers.id),
+		areaId: uuid('area_id').references(() => areas.id),
 		/** Kind-specific description (trap type, size, connection) per $lib/schemas. */
 		details: json('details').$type<Record<string, unknown>>(),
 		retiredAt: at('retired_at'),
@@ -93,3 +116,5 @@ export const assets = mysqlTable(
 	},
 	(t) => [uniqueIndex('assets_site_tag_uq').on(t.siteId, t.tag)]
 );
+
+export type AssetRow = typeof assets.$inferSelect;

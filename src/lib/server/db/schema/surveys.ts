@@ -9,7 +9,7 @@ import {
 	varchar
 } from 'drizzle-orm/mysql-core';
 import { at, changeSeq, createdAt, id, money, updatedAt, uuid, version, word } from './columns';
-import { assets, headers, sites } from './sites';
+import { areas, assets, headers, sites } from './sites';
 import { firms, users } from './tenancy';
 
 /** One visit to a site by one or more auditors. */
@@ -95,8 +95,14 @@ export const findings = mysqlTable(
 		kind: word('kind').notNull(),
 		assetId: uuid('asset_id').references(() => assets.id),
 		headerId: uuid('header_id').references(() => headers.id),
+		areaId: uuid('area_id').references(() => areas.id),
 		location: varchar('location', { length: 255 }),
 		notes: text('notes'),
+		/**
+		 * The capture's photo ids (made on the device), in the order taken. A photo is listed
+		 * here before its bytes arrive; the photos table holds the ones uploaded.
+		 */
+		photoIds: json('photo_ids').$type<string[]>(),
 		inputs: json('inputs').$type<Record<string, unknown>>().notNull(),
 		results: json('results').$type<Record<string, unknown>>(),
 		/** Engine version that produced `results`, so a later engine can recompute. */
