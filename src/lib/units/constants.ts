@@ -14,6 +14,9 @@ export const IN_M = 0.0254;
 /** International foot = 12 in, m (exact; NIST SP 811 B.8). */
 export const FT_M = 12 * IN_M;
 
+/** International mile = 5280 ft, m (exact; NIST SP 811 B.8 lists 1.609 344 E+03 m). */
+export const MILE_M = 5280 * FT_M;
+
 /** Standard acceleration of free fall g_n, m/s² (exact; NIST SP 811 B.8). */
 export const G_N = 9.80665;
 

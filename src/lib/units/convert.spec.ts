@@ -28,8 +28,10 @@ const baseSamples: Record<Quantity, number[]> = {
 	energy: [-1e6, 0, 1, 3.6e6, 1.2e13],
 	length: [-1, 0, 0.0005, 0.3048, 1500],
 	shortLength: [0, 0.003, 0.0508, 0.3],
+	area: [0, 6.4516e-4, 0.09290304, 1, 2500],
 	volume: [0, 1e-3, 3.785411784e-3, 40],
-	mass: [-5, 0, 0.45359237, 1000, 2e6]
+	mass: [-5, 0, 0.45359237, 1000, 2e6],
+	speed: [0, 0.44704, 1, 12.5, 35]
 };
 
 describe('round trips through the base unit, every unit of every quantity', () => {
@@ -144,7 +146,9 @@ describe('errors name the unit and the value', () => {
 		);
 		expect(() => convert(5, 'furlong' as never, 'm' as never)).toThrow(/Unknown unit "furlong"/);
 		expect(() => convert(5, 'm', 'furlong' as never)).toThrow(/Unknown unit "furlong"/);
-		expect(() => toBase('speed' as never, 5, 'm/s' as never)).toThrow(/Unknown quantity "speed"/);
+		expect(() => toBase('luminance' as never, 5, 'cd/m2' as never)).toThrow(
+			/Unknown quantity "luminance"/
+		);
 		expect(() => toBase('massFlow', 2, 'kgh' as never)).toThrow(/Unknown mass flow unit "kgh"/);
 		expect(() => convert(3, 'kg/h', 'kW' as never)).toThrow(
 			'Cannot convert 3 kg/h (mass flow) to kW (power): different quantities'

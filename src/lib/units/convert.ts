@@ -112,7 +112,7 @@ function valueFromDef(
 /**
  * Converts a value in `unit` to the quantity's base unit (pressure MPa absolute, temperature K,
  * mass flow kg/s, specific enthalpy kJ/kg, specific entropy kJ/(kg K), power W, energy J,
- * length m, volume m³, mass kg, temperature difference K).
+ * length m, area m², volume m³, mass kg, speed m/s, temperature difference K).
  *
  * @param ctx site conditions; gauge pressures use ctx.atmosphericPressure (MPa, default 0.101325)
  * @throws UnitError for an unknown unit, a non-finite value, or an absolute pressure or

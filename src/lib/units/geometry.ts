@@ -9,6 +9,16 @@ export const lengthUnits = {
 	ft: { label: 'ft', name: 'feet', factor: FT_M }
 } as const satisfies UnitTable;
 
+/**
+ * Area units, for flat surfaces; base m². ft² = 0.092 903 04 m² and in² = 6.4516 E-04 m²
+ * exactly (NIST SP 811 B.8).
+ */
+export const areaUnits = {
+	m2: { label: 'm²', name: 'square metres', factor: 1 },
+	ft2: { label: 'ft²', name: 'square feet', factor: FT_M * FT_M },
+	in2: { label: 'in²', name: 'square inches', factor: IN_M * IN_M }
+} as const satisfies UnitTable;
+
 /** Volume units; base m³. L = 1e-3 m³; US gal = 231 in³ exactly (NIST SP 811 B.8). */
 export const volumeUnits = {
 	m3: { label: 'm³', name: 'cubic metres', factor: 1 },

@@ -1,5 +1,6 @@
-import { lengthUnits, volumeUnits } from './geometry';
+import { areaUnits, lengthUnits, volumeUnits } from './geometry';
 import { massFlowUnits, massUnits } from './mass';
+import { speedUnits } from './motion';
 import { energyUnits, powerUnits } from './power';
 import { pressureUnits } from './pressure';
 import { temperatureDifferenceUnits, temperatureUnits } from './temperature';
@@ -25,8 +26,10 @@ export const quantities = {
 	energy: { base: 'J', units: energyUnits, absolute: false },
 	length: { base: 'm', units: lengthUnits, absolute: false },
 	shortLength: { base: 'm', units: lengthUnits, absolute: false },
+	area: { base: 'm2', units: areaUnits, absolute: false },
 	volume: { base: 'm3', units: volumeUnits, absolute: false },
-	mass: { base: 'kg', units: massUnits, absolute: false }
+	mass: { base: 'kg', units: massUnits, absolute: false },
+	speed: { base: 'm/s', units: speedUnits, absolute: false }
 } as const;
 
 /** A quantity name: 'pressure', 'temperature', 'massFlow', … */

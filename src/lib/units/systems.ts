@@ -20,8 +20,10 @@ export const unitSystems = {
 		energy: 'GJ',
 		length: 'm',
 		shortLength: 'mm',
+		area: 'm2',
 		volume: 'm3',
-		mass: 'kg'
+		mass: 'kg',
+		speed: 'm/s'
 	},
 	US: {
 		pressure: 'psig',
@@ -34,8 +36,10 @@ export const unitSystems = {
 		energy: 'MMBtu',
 		length: 'ft',
 		shortLength: 'in',
+		area: 'ft2',
 		volume: 'gal_US',
-		mass: 'lb'
+		mass: 'lb',
+		speed: 'mph'
 	}
 } as const satisfies Record<string, UnitSystem>;
 
