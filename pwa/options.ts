@@ -2,12 +2,15 @@ import type { SvelteKitPWAOptions } from '@vite-pwa/sveltekit';
 import { manifest } from './manifest.ts';
 
 /**
- * Service-worker strategy.
- * - The app shell (JS, CSS, fonts, icons, the offline page) is precached at install.
- * - Page navigations go network-first with a short timeout, falling back to the last copy
- *   seen and finally to the offline page: an auditor in a plant room with no signal still
- *   gets the shell.
- * - API calls are never cached by the worker: the outbox and sync client own that data.
+ * Service-worker strategy: cache only what the offline design needs.
+ * - Precached at install: the app's JS, CSS, fonts, icons, the scanner's WebAssembly, the
+ *   prerendered Walk shell and the offline page.
+ * - Every navigation under /walk is answered with the precached Walk shell, online or not:
+ *   the Walk renders on the device from the per-person device database, so a cold start, a
+ *   reload or a deep link to a finding works in a plant room with no signal.
+ * - Every other page goes to the network only (signed-in pages are `no-store` and never kept
+ *   by the worker); without a network the precached offline page is shown instead.
+ * - API calls are never cached by the worker: the device database and outbox own that data.
  */
 export const pwaOptions: SvelteKitPWAOptions = {
 	registerType: 'autoUpdate',
@@ -21,24 +24,22 @@ export const pwaOptions: SvelteKitPWAOptions = {
 	kit: { includeVersionFile: true },
 	workbox: {
 		globPatterns: [
-			'client/**/*.{js,css,html,ico,png,svg,webp,woff,woff2,webmanifest}',
+			'client/**/*.{js,css,html,ico,png,svg,webp,woff,woff2,wasm,webmanifest}',
 			'prerendered/**/*.html'
 		],
-		navigateFallback: null,
+		// The scanner's decoder (about 1.1 MB) is precached so tags scan without signal.
+		maximumFileSizeToCacheInBytes: 3 * 1024 * 1024,
+		navigateFallback: '/walk',
+		navigateFallbackAllowlist: [/^\/walk(\/|$)/],
 		cleanupOutdatedCaches: true,
 		clientsClaim: true,
 		skipWaiting: true,
 		runtimeCaching: [
 			{
 				urlPattern: ({ request, url }) =>
-					request.mode === 'navigate' && !url.pathname.startsWith('/api/'),
-				handler: 'NetworkFirst',
-				options: {
-					cacheName: 'steamwisp-pages',
-					networkTimeoutSeconds: 4,
-					expiration: { maxEntries: 60 },
-					precacheFallback: { fallbackURL: '/offline' }
-				}
+					request.mode === 'navigate' && !/^\/walk(\/|$)/.test(url.pathname),
+				handler: 'NetworkOnly',
+				options: { precacheFallback: { fallbackURL: '/offline' } }
 			}
 		]
 	},
