@@ -1,59 +1,139 @@
 import Dexie, { type EntityTable } from 'dexie';
+import type { FindingCapture } from '$lib/schemas/capture';
+import type { FindingKind, FindingStatus, TrapCondition } from '$lib/schemas/finding-vocabulary';
+import type { CostBasis } from '$lib/schemas/site';
+import type { Area, AssetSnapshot, SiteHeader, SurveySummary } from '$lib/schemas/snapshot';
+import { upgradeToV2 } from './upgrade-v2';
 
 /**
  * The device's own database (IndexedDB through Dexie). Everything an auditor records lands
  * here first, so nothing is lost on reload or without signal; the outbox then carries each
  * change to the server. Keys are UUIDs made on the device. Keep every version() block:
- * phones in the field upgrade from whatever version they hold.
+ * phones in the field upgrade from whatever version they hold. One database per signed-in
+ * person (deviceDbName), so a shared phone keeps auditors apart.
  */
 
-export interface DeviceSurvey {
+/** A survey taken offline: its summary plus where its snapshot was taken. */
+export interface DeviceSurvey extends SurveySummary {
+	/** Server change cursor the snapshot was taken at; sync pulls from here. */
+	cursor: number;
+	takenAt: string;
+}
+
+export interface DeviceSite {
 	id: string;
 	name: string;
-	siteName: string;
-	/** Server change cursor this copy was pulled at. */
-	cursor: number;
-	updatedAt: string;
+	address: string | null;
+	/** Metres above sea level. */
+	elevation: number | null;
+	clientName: string;
+	/** null until the consultant sets it: the Walk records, but prices nothing. */
+	costBasis: CostBasis | null;
+	headers: SiteHeader[];
+	/** The signed-in person's unit system. */
+	unitSystem: 'SI' | 'US';
+	/** MPa absolute, resolved once: cost basis value, else from elevation, else standard. */
+	atmosphericPressure: number;
+}
+
+export type DeviceArea = Area;
+
+/** A tagged trap. `local: 1` = made on this device from a trap capture; a snapshot replaces it. */
+export interface DeviceAsset extends AssetSnapshot {
+	local?: 1;
 }
 
 export interface DeviceFinding {
 	id: string;
 	surveyId: string;
-	kind: 'trap' | 'leak' | 'insulation' | 'header';
-	/** Shape: $lib/schemas/finding. */
-	record: Record<string, unknown>;
+	kind: FindingKind;
+	capture: FindingCapture;
+	/** Server version; 0 = never on the server. */
 	version: number;
+	status: FindingStatus;
+	/** 1 = changed here, not yet accepted by the server. */
+	pending: 0 | 1;
+	deleted: 0 | 1;
 	updatedAt: string;
 }
 
 export interface DevicePhoto {
 	id: string;
 	findingId: string;
+	surveyId: string;
 	blob: Blob;
+	thumbnail: Blob;
 	contentType: string;
+	/** Pixels; 0 when unknown (photos kept from version 1). */
+	width: number;
+	height: number;
+	/** Size of `blob`, bytes. */
+	bytes: number;
 	uploaded: 0 | 1;
 	createdAt: string;
+}
+
+export interface DeviceDraft {
+	key: string;
+	surveyId: string;
+	kind: FindingKind;
+	findingId: string;
+	/** The form's fields as typed (raw strings, before any conversion). */
+	values: Record<string, string>;
+	updatedAt: string;
 }
 
 /** One change waiting for the server. `mutationId` makes a replayed push harmless. */
 export interface OutboxEntry {
 	seq?: number;
 	mutationId: string;
-	entity: 'finding' | 'photo';
-	entityId: string;
-	payload: Record<string, unknown>;
+	entity: 'finding';
+	op: 'upsert' | 'delete';
+	recordId: string;
+	/** Server version the change was made on (0 = a finding new on this device). */
+	baseVersion: number;
+	/** The capture, exactly what `POST /api/sync/push` takes as `data`; null for a delete. */
+	payload: FindingCapture | null;
 	attempts: number;
 	lastError?: string;
 	createdAt: string;
 }
 
+/**
+ * A row an upgrade could not carry into the new shape, kept as it was so nothing recorded is
+ * lost silently (a support person can still read it out of the browser's storage).
+ */
+export interface SetAsideRow {
+	seq?: number;
+	/** The store the row came from and its key there. */
+	store: string;
+	key: string;
+	row: unknown;
+	reason: string;
+	setAsideAt: string;
+}
+
+/** What the round's list is narrowed to (round.ts filterFindings); every field optional. */
+export interface FindingFilter {
+	areaId?: string;
+	kind?: FindingKind;
+	condition?: TrapCondition;
+	tag?: string;
+	text?: string;
+}
+
 export class DeviceDatabase extends Dexie {
 	surveys!: EntityTable<DeviceSurvey, 'id'>;
+	sites!: EntityTable<DeviceSite, 'id'>;
+	areas!: EntityTable<DeviceArea, 'id'>;
+	assets!: EntityTable<DeviceAsset, 'id'>;
 	findings!: EntityTable<DeviceFinding, 'id'>;
 	photos!: EntityTable<DevicePhoto, 'id'>;
+	drafts!: EntityTable<DeviceDraft, 'key'>;
 	outbox!: EntityTable<OutboxEntry, 'seq'>;
+	setAside!: EntityTable<SetAsideRow, 'seq'>;
 
-	constructor(name = 'steamwisp') {
+	constructor(name: string) {
 		super(name);
 		this.version(1).stores({
 			surveys: 'id, updatedAt',
@@ -61,13 +141,56 @@ export class DeviceDatabase extends Dexie {
 			photos: 'id, findingId, uploaded',
 			outbox: '++seq, &mutationId, entityId'
 		});
+		this.version(2)
+			.stores({
+				surveys: 'id, updatedAt, siteId',
+				sites: 'id',
+				areas: 'id, siteId',
+				assets: 'id, siteId, &[siteId+tag]',
+				findings: 'id, surveyId, [surveyId+kind], [surveyId+updatedAt]',
+				photos: 'id, findingId, surveyId, uploaded',
+				drafts: 'key, surveyId',
+				outbox: '++seq, &mutationId, recordId',
+				setAside: '++seq, store'
+			})
+			.upgrade(upgradeToV2);
 	}
 }
 
-let instance: DeviceDatabase | undefined;
-
-/** The device database, opened on first use (browser only). */
-export function deviceDb(): DeviceDatabase {
-	instance ??= new DeviceDatabase();
-	return instance;
+/** The database name of one signed-in person's device data. */
+export function deviceDbName(userId: string): string {
+	if (typeof userId !== 'string' || userId.trim() === '') {
+		throw new Error('The device database belongs to a signed-in person: no person given');
+	}
+	return `steamwisp-user-${userId}`;
 }
+
+const open = new Map<string, DeviceDatabase>();
+
+/** The device database of one person, opened on first use and kept open (browser only). */
+export function openDeviceDb(userId: string): DeviceDatabase {
+	const name = deviceDbName(userId);
+	let db = open.get(name);
+	if (!db) {
+		db = new DeviceDatabase(name);
+		open.set(name, db);
+	}
+	return db;
+}
+
+/** Closes a person's database (on sign-out), so the next openDeviceDb starts afresh. */
+export function closeDeviceDb(userId: string): void {
+	const name = deviceDbName(userId);
+	open.get(name)?.close();
+	open.delete(name);
+}
+
+/**
+ * The shared database of version 1, before there was one per person.
+ * @deprecated Use openDeviceDb(userId); kept while the Walk's first page still reads it.
+ */
+export function deviceDb(): DeviceDatabase {
+	legacy ??= new DeviceDatabase('steamwisp');
+	return legacy;
+}
+let legacy: DeviceDatabase | undefined;
