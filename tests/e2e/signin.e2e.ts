@@ -8,7 +8,7 @@ test.describe('sign-in to each surface', () => {
 		await page.getByLabel('Password').fill(demoPassword);
 		await page.getByRole('button', { name: 'Sign in' }).click();
 		await expect(page).toHaveURL((url) => url.pathname === '/desk');
-		await expect(page.getByText('Millbeck Creamery — winter steam survey')).toBeVisible();
+		await expect(page.getByText('Larkspindle Creamery — winter steam survey')).toBeVisible();
 		await expect(page.getByText('No. 2 Mill')).toHaveCount(0);
 	});
 
@@ -24,7 +24,7 @@ test.describe('sign-in to each surface', () => {
 
 	test('a client lands on Ladder and may not open Desk', async ({ page }) => {
 		await page.goto('/signin?next=/ladder');
-		await page.getByLabel('E-mail address').fill('plant.manager@millbeck-dairy.example');
+		await page.getByLabel('E-mail address').fill('plant.manager@larkspindle-dairy.example');
 		await page.getByLabel('Password').fill(demoPassword);
 		await page.getByRole('button', { name: 'Sign in' }).click();
 		await expect(page).toHaveURL((url) => url.pathname === '/ladder');

@@ -27,9 +27,9 @@ const person = (email: string): SessionUser => {
 const adminA = person('admin@cinderbrook.example');
 const consultantA = person('consultant@cinderbrook.example');
 const auditorA = person('auditor@cinderbrook.example');
-const clientA = person('plant.manager@millbeck-dairy.example');
+const clientA = person('plant.manager@larkspindle-dairy.example');
 const adminB = person('admin@northgale.example');
-const clientB = person('mill.manager@orrin-paper.example');
+const clientB = person('mill.manager@tarnwhistle-paper.example');
 
 const inFieldA = demoSurveys[0].id;
 const surveyB = demoSurveys[1].id;

@@ -52,7 +52,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 	const site = demoSites[index];
 	const survey = demoSurveys[index];
 	const published = [demoPublishedSurvey].filter((p) => p.firmId === firm.id);
-	const tag = index === 0 ? 'Ashgrove' : 'Brightwater';
+	const tag = index === 0 ? 'Alphatest' : 'Betatest';
 	const ids = {
 		otherClient: hex(index, 1),
 		otherSite: hex(index, 2),

@@ -27,14 +27,14 @@ export const demoClients = [
 	{
 		id: '5e7a0002-0000-4000-8000-000000000001',
 		firmId: demoFirms[0].id,
-		name: 'Millbeck Dairy Co-operative',
-		contactEmail: 'engineering@millbeck-dairy.example'
+		name: 'Larkspindle Dairy Co-operative',
+		contactEmail: 'engineering@larkspindle-dairy.example'
 	},
 	{
 		id: '5e7a0002-0000-4000-8000-000000000002',
 		firmId: demoFirms[1].id,
-		name: 'Orrin Valley Paper',
-		contactEmail: 'plant@orrin-paper.example'
+		name: 'Tarnwhistle Paper Company',
+		contactEmail: 'plant@tarnwhistle-paper.example'
 	}
 ] as const;
 
@@ -72,7 +72,7 @@ export const demoUsers: DemoUser[] = [
 	{
 		id: '5e7a0003-0000-4000-8000-000000000004',
 		firmId: demoFirms[0].id,
-		email: 'plant.manager@millbeck-dairy.example',
+		email: 'plant.manager@larkspindle-dairy.example',
 		name: 'Declan Fairweather',
 		role: 'client',
 		clientCompanyId: demoClients[0].id
@@ -101,7 +101,7 @@ export const demoUsers: DemoUser[] = [
 	{
 		id: '5e7a0003-0000-4000-8000-000000000008',
 		firmId: demoFirms[1].id,
-		email: 'mill.manager@orrin-paper.example',
+		email: 'mill.manager@tarnwhistle-paper.example',
 		name: 'Sam Whitcombe',
 		role: 'client',
 		clientCompanyId: demoClients[1].id
@@ -114,35 +114,41 @@ const barg = (bar: number, elevation: number) =>
 		atmosphericPressure: atmosphericPressureAtElevation(elevation)
 	});
 
-const millbeckElevation = 85;
-const orrinElevation = 240;
+const creameryElevation = 85;
+const millElevation = 240;
 
 export const demoSites = [
 	{
 		id: '5e7a0004-0000-4000-8000-000000000001',
 		firmId: demoFirms[0].id,
 		clientCompanyId: demoClients[0].id,
-		name: 'Millbeck Creamery',
-		address: 'Creamery Lane 4, Millbeck (invented)',
-		elevation: millbeckElevation,
+		name: 'Larkspindle Creamery',
+		address: 'Creamery Lane 4, Larkspindle (invented)',
+		elevation: creameryElevation,
 		headers: [
 			{
 				id: '5e7a0005-0000-4000-8000-000000000001',
 				name: 'HP boiler header',
-				pressure: barg(10, millbeckElevation),
+				pressure: barg(10, creameryElevation),
 				sortOrder: 1
 			},
 			{
 				id: '5e7a0005-0000-4000-8000-000000000002',
 				name: 'Process (evaporators)',
-				pressure: barg(7, millbeckElevation),
+				pressure: barg(7, creameryElevation),
 				sortOrder: 2
 			},
 			{
 				id: '5e7a0005-0000-4000-8000-000000000003',
 				name: 'CIP and space heating',
-				pressure: barg(3, millbeckElevation),
+				pressure: barg(3, creameryElevation),
 				sortOrder: 3
+			},
+			{
+				id: '5e7a0005-0000-4000-8000-000000000004',
+				name: 'Flash steam (low pressure)',
+				pressure: barg(0.7, creameryElevation),
+				sortOrder: 4
 			}
 		]
 	},
@@ -150,20 +156,20 @@ export const demoSites = [
 		id: '5e7a0004-0000-4000-8000-000000000002',
 		firmId: demoFirms[1].id,
 		clientCompanyId: demoClients[1].id,
-		name: 'Orrin Valley No. 2 Mill',
-		address: 'River Road, Orrin Valley (invented)',
-		elevation: orrinElevation,
+		name: 'Tarnwhistle No. 2 Mill',
+		address: 'River Road, Tarnwhistle (invented)',
+		elevation: millElevation,
 		headers: [
 			{
 				id: '5e7a0005-0000-4000-8000-000000000011',
 				name: 'Dryer section',
-				pressure: barg(11, orrinElevation),
+				pressure: barg(11, millElevation),
 				sortOrder: 1
 			},
 			{
 				id: '5e7a0005-0000-4000-8000-000000000012',
 				name: 'Low-pressure',
-				pressure: barg(3.5, orrinElevation),
+				pressure: barg(3.5, millElevation),
 				sortOrder: 2
 			}
 		]
@@ -175,7 +181,7 @@ export const demoSurveys = [
 		id: '5e7a0006-0000-4000-8000-000000000001',
 		firmId: demoFirms[0].id,
 		siteId: demoSites[0].id,
-		name: 'Millbeck Creamery — winter steam survey',
+		name: 'Larkspindle Creamery — winter steam survey',
 		startsOn: '2026-11-16',
 		endsOn: '2026-11-20',
 		status: 'in-field',

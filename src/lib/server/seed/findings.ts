@@ -1,17 +1,29 @@
 /**
- * Demo findings for the invented Millbeck Creamery: one survey still in the field and an earlier
- * one published to the client, so every surface has something real to show. Inputs are in the
- * engine's base units (MPa absolute, K, m); results are computed by the same evaluateFinding the
- * server uses for synced findings.
+ * Demo findings for the invented Larkspindle Creamery: a spring survey published to the client
+ * (a trap test of every tagged trap, a leak and two insulation gaps) and the winter survey
+ * still in the field with the first dozen findings from the auditor's phone. Inputs are in the
+ * engine's base units (MPa absolute, K, m); results are computed by the same evaluateFinding
+ * the server uses for synced findings.
  */
+import type { TrapCondition, TrapTestMethod } from '../../schemas/finding-vocabulary';
 import type { CostBasis } from '../../schemas/site';
-import { toBase } from '../../units/index';
-import { demoSites } from './demo';
+import { atmosphericPressureAtElevation, toBase } from '../../units/index';
+import { creameryAreas } from './areas';
+import { demoSites, demoSurveys } from './demo';
+import { captureOf, findingId, type DemoFinding } from './demo-finding';
+import { publishedSurveyId, springTrapFindings } from './spring';
+import { registerTrap } from './traps';
+
+export { publishedSurveyId, captureOf };
 
 const K = (celsius: number) => toBase('temperature', celsius, 'degC');
 const mm = (millimetres: number) => toBase('shortLength', millimetres, 'mm');
+const barg = (bar: number) =>
+	toBase('pressure', bar, 'bar_g', {
+		atmosphericPressure: atmosphericPressureAtElevation(demoSites[0].elevation)
+	});
 
-export const millbeckCostBasis: CostBasis = {
+export const creameryCostBasis: CostBasis = {
 	fuel: { kind: 'natural-gas', price: '11.20', unit: 'GJ' },
 	currency: 'EUR',
 	boilerEfficiency: 0.84,
@@ -25,7 +37,7 @@ export const millbeckCostBasis: CostBasis = {
 	lifeYears: 8
 };
 
-export const orrinCostBasis: CostBasis = {
+export const paperMillCostBasis: CostBasis = {
 	fuel: { kind: 'natural-gas', price: '4.10', unit: 'MMBtu' },
 	currency: 'USD',
 	boilerEfficiency: 0.81,
@@ -37,228 +49,182 @@ export const orrinCostBasis: CostBasis = {
 	elevation: demoSites[1].elevation
 };
 
-const [hp, process, cip] = demoSites[0].headers.map((h) => h.id);
-
-export const publishedSurveyId = '5e7a0006-0000-4000-8000-000000000003';
-const fieldSurveyId = '5e7a0006-0000-4000-8000-000000000001';
+const [hp, processHeader, cip] = demoSites[0].headers.map((h) => h.id);
+const { boilerHouse, evaporatorHall, cipRoom } = creameryAreas;
+const fieldSurveyId = demoSurveys[0].id;
 
 export const demoPublishedSurvey = {
 	id: publishedSurveyId,
 	firmId: demoSites[0].firmId,
 	siteId: demoSites[0].id,
-	name: 'Millbeck Creamery — spring steam survey',
+	name: 'Larkspindle Creamery — spring steam survey',
 	startsOn: '2026-04-13',
 	endsOn: '2026-04-15',
 	status: 'published',
 	publishedAt: new Date('2026-05-04T09:00:00Z')
 };
 
-const common = {
+const spring = (at: string) => ({
+	surveyId: publishedSurveyId,
 	notes: '',
+	photoIds: [],
+	status: 'published' as const,
+	reviewed: true,
 	version: 1,
 	deleted: false,
-	createdAt: '2026-04-14T08:00:00Z',
-	updatedAt: '2026-04-14T08:00:00Z'
-};
-const fid = (n: number) => `5e7a0007-0000-4000-8000-${String(n).padStart(12, '0')}`;
+	createdAt: at,
+	updatedAt: at
+});
+const field = (at: string) => ({
+	...spring(at),
+	surveyId: fieldSurveyId,
+	status: 'draft' as const,
+	reviewed: false
+});
 
-/** The findings as the device would send them (validated by findingSchema before seeding). */
-export const demoFindings = [
-	// Spring survey (published): the client sees these ranked on the Ladder.
+const insulation = {
+	windSpeed: 0,
+	layers: [{ thickness: mm(50), material: 'mineral-wool' }],
+	jacketEmissivity: 0.1,
+	bareEmissivity: 0.85
+};
+
+const springOthers: DemoFinding[] = [
 	{
-		...common,
-		id: fid(1),
-		surveyId: publishedSurveyId,
-		kind: 'trap',
-		headerId: process,
-		assetTag: 'ST-E1-04',
-		location: 'Evaporator 1, condensate leg',
-		status: 'published',
-		repairCost: 48_000,
-		inputs: {
-			trapType: 'inverted-bucket',
-			dn: 20,
-			condition: 'failed-open',
-			discharge: 'atmosphere',
-			testMethod: 'ultrasound'
-		}
-	},
-	{
-		...common,
-		id: fid(2),
-		surveyId: publishedSurveyId,
-		kind: 'trap',
-		headerId: hp,
-		assetTag: 'ST-BH-11',
-		location: 'Boiler house, main header drip',
-		status: 'published',
-		repairCost: 52_000,
-		inputs: {
-			trapType: 'thermodynamic',
-			dn: 15,
-			condition: 'leaking',
-			discharge: 'atmosphere',
-			testMethod: 'combined'
-		}
-	},
-	{
-		...common,
-		id: fid(3),
-		surveyId: publishedSurveyId,
-		kind: 'trap',
-		headerId: cip,
-		assetTag: 'ST-CIP-02',
-		location: 'CIP set 2, heater outlet',
-		status: 'published',
-		repairCost: 36_000,
-		inputs: {
-			trapType: 'float-thermostatic',
-			dn: 25,
-			condition: 'failed-closed',
-			discharge: 'condensate-return',
-			backPressure: 0.13,
-			testMethod: 'temperature'
-		}
-	},
-	{
-		...common,
-		id: fid(4),
-		surveyId: publishedSurveyId,
+		...spring('2026-04-13T11:20:00Z'),
+		id: findingId(4),
 		kind: 'leak',
-		headerId: process,
+		headerId: processHeader,
+		areaId: evaporatorHall.id,
 		location: 'Evaporator gallery, globe valve gland',
-		status: 'published',
 		repairCost: 30_000,
 		inputs: { sizeClass: 'small' }
 	},
 	{
-		...common,
-		id: fid(5),
-		surveyId: publishedSurveyId,
+		...spring('2026-04-13T09:10:00Z'),
+		id: findingId(5),
 		kind: 'insulation',
 		headerId: hp,
+		areaId: boilerHouse.id,
 		location: 'Boiler house to dryer, pipe rack',
-		status: 'published',
 		repairCost: 210_000,
 		inputs: {
+			...insulation,
 			item: 'pipe',
 			dn: 100,
 			length: 14,
 			ambientTemperature: K(18),
 			windSpeed: 0.5,
-			layers: [{ thickness: mm(80), material: 'mineral-wool' }],
-			jacketEmissivity: 0.1,
-			bareEmissivity: 0.85
+			layers: [{ thickness: mm(80), material: 'mineral-wool' }]
 		}
 	},
 	{
-		...common,
-		id: fid(6),
-		surveyId: publishedSurveyId,
+		...spring('2026-04-13T11:45:00Z'),
+		id: findingId(6),
 		kind: 'insulation',
-		headerId: process,
+		headerId: processHeader,
+		areaId: evaporatorHall.id,
 		location: 'Evaporator feed, bare gate valves',
-		status: 'published',
 		repairCost: 64_000,
-		inputs: {
-			item: 'valve',
-			dn: 80,
-			count: 4,
-			ambientTemperature: K(22),
-			windSpeed: 0,
-			layers: [{ thickness: mm(50), material: 'mineral-wool' }],
-			jacketEmissivity: 0.1,
-			bareEmissivity: 0.85
-		}
-	},
-	// Winter survey (in the field): drafts as they arrive from the auditor's phone.
-	{
-		...common,
-		id: fid(11),
-		surveyId: fieldSurveyId,
+		inputs: { ...insulation, item: 'valve', dn: 80, count: 4, ambientTemperature: K(22) }
+	}
+];
+
+/** A winter trap test of a register trap: its details, today's condition. */
+function fieldTrap(
+	n: number,
+	tag: string,
+	condition: TrapCondition,
+	testMethod: TrapTestMethod | undefined,
+	at: string,
+	notes = ''
+): DemoFinding {
+	const trap = registerTrap(tag);
+	return {
+		...field(at),
+		id: findingId(n),
 		kind: 'trap',
-		headerId: process,
-		assetTag: 'ST-E1-04',
-		location: 'Evaporator 1, condensate leg',
-		status: 'draft',
-		inputs: {
-			trapType: 'inverted-bucket',
-			dn: 20,
-			condition: 'working',
-			discharge: 'atmosphere',
-			testMethod: 'ultrasound'
-		},
-		createdAt: '2026-11-17T09:12:00Z',
-		updatedAt: '2026-11-17T09:12:00Z'
-	},
+		headerId: trap.headerId,
+		areaId: creameryAreas[trap.area].id,
+		assetTag: tag,
+		location: trap.location,
+		notes,
+		inputs: { ...trap.details, condition, ...(testMethod ? { testMethod } : {}) }
+	};
+}
+
+const fieldFindings: DemoFinding[] = [
+	fieldTrap(
+		11,
+		'ST-E1-04',
+		'working',
+		'ultrasound',
+		'2026-11-17T09:12:00Z',
+		'Replaced since spring.'
+	),
+	fieldTrap(12, 'ST-BH-14', 'failed-open', 'ultrasound', '2026-11-17T08:40:00Z'),
+	fieldTrap(15, 'ST-BH-11', 'leaking', 'combined', '2026-11-17T08:25:00Z'),
+	fieldTrap(16, 'ST-BH-02', 'working', 'ultrasound', '2026-11-17T08:05:00Z'),
+	fieldTrap(17, 'ST-BH-06', 'failed-open', 'combined', '2026-11-17T08:15:00Z', 'Still blowing.'),
+	fieldTrap(18, 'ST-E1-01', 'working', 'ultrasound', '2026-11-17T09:00:00Z'),
+	fieldTrap(19, 'ST-E2-08', 'not-accessible', undefined, '2026-11-17T09:55:00Z', 'Gallery closed.'),
 	{
-		...common,
-		id: fid(12),
-		surveyId: fieldSurveyId,
-		kind: 'trap',
-		headerId: hp,
-		assetTag: 'ST-BH-14',
-		location: 'Boiler house, economiser drain',
-		status: 'draft',
-		inputs: {
-			trapType: 'thermodynamic',
-			dn: 15,
-			condition: 'failed-open',
-			discharge: 'atmosphere',
-			testMethod: 'ultrasound'
-		},
-		createdAt: '2026-11-17T09:40:00Z',
-		updatedAt: '2026-11-17T09:40:00Z'
-	},
-	{
-		...common,
-		id: fid(13),
-		surveyId: fieldSurveyId,
+		...field('2026-11-17T08:50:00Z'),
+		id: findingId(13),
 		kind: 'leak',
 		headerId: hp,
-		location: 'Header flange by PRV station',
-		status: 'draft',
-		inputs: { holeDiameter: mm(2.5) },
-		createdAt: '2026-11-17T10:05:00Z',
-		updatedAt: '2026-11-17T10:05:00Z'
+		areaId: boilerHouse.id,
+		location: 'Boiler house, header flange by PRV station',
+		inputs: { holeDiameter: mm(2.5) }
 	},
 	{
-		...common,
-		id: fid(14),
-		surveyId: fieldSurveyId,
+		...field('2026-11-17T09:40:00Z'),
+		id: findingId(20),
+		kind: 'leak',
+		headerId: processHeader,
+		areaId: evaporatorHall.id,
+		location: 'Evaporator 2 gallery, globe valve gland',
+		inputs: { sizeClass: 'medium' }
+	},
+	{
+		...field('2026-11-17T10:45:00Z'),
+		id: findingId(21),
+		kind: 'insulation',
+		headerId: cip,
+		areaId: cipRoom.id,
+		location: 'CIP room, flange pairs at the heater inlet',
+		inputs: {
+			...insulation,
+			item: 'flange-pair',
+			dn: 50,
+			count: 3,
+			ambientTemperature: K(24),
+			layers: [{ thickness: mm(40), material: 'mineral-wool' }]
+		}
+	},
+	{
+		...field('2026-11-17T08:00:00Z'),
+		id: findingId(22),
 		kind: 'header',
-		headerId: process,
+		headerId: hp,
+		areaId: boilerHouse.id,
+		location: 'Boiler house, header gauge PG-01',
+		inputs: { measuredPressure: barg(10.2), measuredTemperature: K(186) }
+	},
+	{
+		...field('2026-11-17T10:30:00Z'),
+		id: findingId(14),
+		kind: 'header',
+		headerId: processHeader,
+		areaId: evaporatorHall.id,
 		location: 'Process header gauge PG-07',
-		status: 'draft',
-		inputs: { measuredPressure: 0.78, measuredTemperature: K(169) },
-		createdAt: '2026-11-17T10:30:00Z',
-		updatedAt: '2026-11-17T10:30:00Z'
+		inputs: { measuredPressure: 0.78, measuredTemperature: K(169) }
 	}
-] as const;
+];
 
-export const demoAssets = [
-	{
-		id: '5e7a0008-0000-4000-8000-000000000001',
-		tag: 'ST-E1-04',
-		location: 'Evaporator 1, condensate leg',
-		headerId: process
-	},
-	{
-		id: '5e7a0008-0000-4000-8000-000000000002',
-		tag: 'ST-BH-11',
-		location: 'Boiler house, main header drip',
-		headerId: hp
-	},
-	{
-		id: '5e7a0008-0000-4000-8000-000000000003',
-		tag: 'ST-CIP-02',
-		location: 'CIP set 2, heater outlet',
-		headerId: cip
-	},
-	{
-		id: '5e7a0008-0000-4000-8000-000000000004',
-		tag: 'ST-BH-14',
-		location: 'Boiler house, economiser drain',
-		headerId: hp
-	}
-].map((a) => ({ ...a, siteId: demoSites[0].id, kind: 'trap' }));
+/** Every demo finding, earlier survey first (the order the seed writes them in). */
+export const demoFindings: DemoFinding[] = [
+	...springTrapFindings,
+	...springOthers,
+	...fieldFindings.sort((a, b) => a.createdAt.localeCompare(b.createdAt))
+];

@@ -1,17 +1,19 @@
 import { sql } from 'drizzle-orm';
-import type { MySql2Database } from 'drizzle-orm/mysql2';
+import type { Db } from '../db/types';
 import { hashPassword } from '../auth/password';
 import * as schema from '../db/schema';
 import { demoClients, demoFirms, demoPassword, demoSites, demoSurveys, demoUsers } from './demo';
+import { renameOldDemoPlaces } from './renames';
 import { seedDemoFindings } from './seed-findings';
 
 /**
  * Writes the demo scenario. Idempotent: rows have fixed ids and existing rows are left as
  * people may have edited them (only missing rows are inserted).
  */
-export async function seedDemo(db: MySql2Database<typeof schema>): Promise<void> {
+export async function seedDemo(db: Db): Promise<void> {
 	const { firms, clientCompanies, users, sites, headers, surveys, surveyAuditors } = schema;
 	const keep = { set: { id: sql`id` } };
+	await renameOldDemoPlaces(db);
 	for (const f of demoFirms) {
 		await db
 			.insert(firms)

@@ -7,7 +7,7 @@ describe('account messages', () => {
 		firmName: 'Cinderbrook <Energy> & Partners',
 		inviterName: 'Ines "the boss" Okafor',
 		role: 'client',
-		clientName: 'Millbeck Dairy',
+		clientName: 'Larkspindle Dairy',
 		url: 'http://127.0.0.1:4180/invitation/abc?x=1&y=2',
 		days: 7
 	});
@@ -26,7 +26,7 @@ describe('account messages', () => {
 
 	it('says the role, the client company and how long the link works', () => {
 		expect(invite.text).toContain('as a client user');
-		expect(invite.text).toContain('for Millbeck Dairy');
+		expect(invite.text).toContain('for Larkspindle Dairy');
 		expect(invite.text).toContain('for 7 days');
 	});
 
