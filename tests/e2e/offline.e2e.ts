@@ -1,36 +1,6 @@
-import { expect, test, type Page } from '@playwright/test';
-
-/**
- * Waits until the worker has finished precaching and controls this page. An 'activated'
- * state alone can be seen before the precache is visible (STACK.md gotcha 3).
- */
-async function waitForActiveWorker(page: Page) {
-	await page.waitForFunction(
-		async () => {
-			const reg = await navigator.serviceWorker.getRegistration();
-			const precached = (await caches.keys()).some((k) => k.startsWith('workbox-precache'));
-			return (
-				reg?.active?.state === 'activated' && !!navigator.serviceWorker.controller && precached
-			);
-		},
-		undefined,
-		{ timeout: 20_000, polling: 250 }
-	);
-	// Chromium may still route the very next navigation to the network for a moment after
-	// the worker claims the page: reload until a navigation has gone through the worker.
-	await expect
-		.poll(
-			async () => {
-				await page.reload();
-				return page.evaluate(() => {
-					const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming;
-					return nav.workerStart > 0;
-				});
-			},
-			{ timeout: 20_000, intervals: [250, 500, 1000] }
-		)
-		.toBe(true);
-}
+import { expect, test } from '@playwright/test';
+import { demoPassword } from '../../src/lib/server/seed/demo';
+import { signInHere, waitForActiveWorker } from './support/worker';
 
 test.describe('offline', () => {
 	test('the service worker registers and activates', async ({ page }) => {
@@ -46,9 +16,10 @@ test.describe('offline', () => {
 		page,
 		context
 	}) => {
-		await page.goto('/walk');
+		await signInHere(page, 'auditor@cinderbrook.example', demoPassword);
 		await waitForActiveWorker(page);
 		await expect(page.getByRole('heading', { name: 'Your surveys' })).toBeVisible();
+		await expect(page.getByRole('status')).toContainText('Online');
 
 		await context.setOffline(true);
 		await page.reload();
