@@ -3,6 +3,7 @@
  * by app code.
  */
 import type { FindingCapture, LeakCapture, TrapCapture } from '$lib/schemas/capture';
+import type { CostBasis } from '$lib/schemas/site';
 import type { SurveySnapshot } from '$lib/schemas/snapshot';
 import { DeviceDatabase } from './db';
 
@@ -11,6 +12,18 @@ export const SURVEY_ID = '5e1f0000-0000-4000-8000-000000000002';
 export const HEADER_ID = '5e1f0000-0000-4000-8000-000000000003';
 export const AREA_BOILER = '5e1f0000-0000-4000-8000-000000000004';
 export const AREA_DRYER = '5e1f0000-0000-4000-8000-000000000005';
+
+/** An invented natural-gas cost basis. */
+export const COST_BASIS: CostBasis = {
+	fuel: { kind: 'natural-gas', price: '8.50', unit: 'GJ' },
+	currency: 'EUR',
+	boilerEfficiency: 0.82,
+	feedwaterTemperature: 378.15,
+	condensateReturnFraction: 0.6,
+	makeupWaterPrice: '1.85',
+	waterTreatmentPrice: '0.75',
+	operatingHours: 8000
+};
 
 /** A fresh, uniquely named database; delete it after the test. */
 export function testDb(): DeviceDatabase {
