@@ -14,6 +14,12 @@ const frameworkImports = [
 	{
 		group: ['dexie', 'drizzle-orm', 'drizzle-orm/*', 'mysql2', 'mysql2/*', 'node:*', 'fs', 'path'],
 		message: 'The engine is pure: no database or Node imports.'
+	},
+	{
+		// The schemas import the engine's types and ids, never the other way round.
+		group: ['**/schemas', '**/schemas/**', '$lib/schemas', '$lib/schemas/**', '$lib/schemas*'],
+		message:
+			'The engine owns its input types and vocabulary: src/lib/schemas imports them, not the reverse.'
 	}
 ];
 
@@ -64,7 +70,8 @@ export default ts.config(
 				parser: ts.parser,
 				svelteConfig
 			}
-		}
+		},
+		rules: { '@typescript-eslint/no-floating-promises': 'error' }
 	},
 	{
 		files: ['src/lib/steam/**', 'src/lib/units/**'],

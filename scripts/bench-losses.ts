@@ -3,7 +3,6 @@
  * leak, and whole findings priced by evaluateFinding. Engine-only: python3-iapws has nothing
  * like them. The site and findings are demo data in the shapes the app stores.
  */
-import type { Finding } from '../src/lib/schemas/finding';
 import {
 	findingCommon as common,
 	lossSite as site,
@@ -14,6 +13,7 @@ import {
 	evaluateFinding,
 	orificeSteamFlow,
 	saturationTemperature,
+	type FindingInput as Finding,
 	type OrificeInput
 } from '../src/lib/steam/index';
 

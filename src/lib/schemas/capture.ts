@@ -14,7 +14,7 @@ import {
 	leakInputsSchema,
 	trapInputsSchema
 } from './finding-inputs';
-import { FINDING_KINDS } from './finding-vocabulary';
+import type { FindingInput } from '../steam/losses/inputs';
 
 /** Photos one finding may carry. */
 export const MAX_PHOTOS_PER_FINDING = 12;
@@ -70,15 +70,9 @@ export const headerCaptureSchema = captureBaseSchema.extend({
 	inputs: headerInputsSchema
 });
 
-/** Rules that span fields, shared by the capture and the full stored finding. */
+/** Rules that span fields, shared by the capture and the full stored finding (./finding.ts). */
 export function checkCapture(
-	finding: {
-		kind: (typeof FINDING_KINDS)[number];
-		headerId?: string;
-		inputs: { processTemperature?: number };
-		createdAt: string;
-		updatedAt: string;
-	},
+	finding: FindingInput & { createdAt: string; updatedAt: string },
 	ctx: z.RefinementCtx
 ): void {
 	if (finding.headerId === undefined) {
@@ -109,7 +103,10 @@ export const findingCaptureSchema = z
 	.discriminatedUnion(
 		'kind',
 		[trapCaptureSchema, leakCaptureSchema, insulationCaptureSchema, headerCaptureSchema],
-		{ error: 'Choose what you are recording: a trap test, a leak, an insulation gap or a header reading' }
+		{
+			error:
+				'Choose what you are recording: a trap test, a leak, an insulation gap or a header reading'
+		}
 	)
 	.superRefine(checkCapture);
 

@@ -4,6 +4,8 @@
  * the edges. Money is never a float: unit prices are decimal strings, amounts integer minor units.
  */
 import { z } from 'zod';
+import { NOMINAL_DNS, type NominalDn } from '../steam/vocabulary';
+import type { Same } from './agrees';
 
 /** A unit price as a decimal string: up to 12 whole digits and 6 decimals, no sign, no exponent. */
 export const DECIMAL_PATTERN = /^\d{1,12}(\.\d{1,6})?$/;
@@ -26,11 +28,6 @@ export const minorUnitsSchema = z
 export const currencySchema = z
 	.string({ error: 'Choose a currency' })
 	.regex(/^[A-Z]{3}$/, { error: 'Currency must be a three-letter ISO 4217 code, e.g. USD or EUR' });
-
-/** The error option for an enum: names the allowed values. */
-export function oneOf(label: string, values: readonly string[]) {
-	return { error: `${label} must be one of: ${values.join(', ')}` };
-}
 
 export const uuidSchema = z.uuid({ error: 'Must be a UUID' });
 
@@ -86,14 +83,12 @@ export const NOMINAL_SIZES = [
 	{ dn: 600, nps: '24' }
 ] as const;
 
-export type NominalDn = (typeof NOMINAL_SIZES)[number]['dn'];
+export type { NominalDn };
 export type NominalNps = (typeof NOMINAL_SIZES)[number]['nps'];
+// The engine's DN list and this table name the same sizes.
+const _sameDns: Same<(typeof NOMINAL_SIZES)[number]['dn'], NominalDn> = true;
 
-const DN_VALUES = NOMINAL_SIZES.map((s) => s.dn) as NominalDn[];
-
-export const dnSchema = z.literal(DN_VALUES, {
-	error: `Nominal size must be a standard DN: ${DN_VALUES.join(', ')} (DN 15 is NPS 1/2)`
-});
+export const dnSchema = z.literal([...NOMINAL_DNS], { error: 'Choose a standard nominal size' });
 
 /** The NPS designation for a DN, e.g. 15 → '1/2'. */
 export function npsForDn(dn: NominalDn): NominalNps {

@@ -1,57 +1,71 @@
 /**
  * Kind-specific inputs of a finding, in the engine's base units (p MPa absolute, T K,
- * lengths m, mass flow kg/s), with plain error messages for the forms.
+ * lengths m, mass flow kg/s), with plain error messages for the forms. Each schema is checked
+ * at compile time against the engine's own input type (src/lib/steam/losses/inputs.ts), and
+ * every numeric bound comes from INPUT_LIMITS (./ranges.ts).
  */
 import { z } from 'zod';
-import { dnSchema, oneOf, pressureSchema, temperatureSchema } from './common';
+import type {
+	HeaderInputs,
+	InsulationInputs,
+	InsulationLayerInput,
+	InsulationMaterialInput,
+	LeakInputs,
+	TrapInputs
+} from '../steam/losses/inputs';
+import type { Agrees } from './agrees';
+import { dnSchema } from './common';
 import {
 	INSULATION_ITEMS,
 	INSULATION_MATERIALS,
+	INSULATION_STATES,
+	LEAK_COMPONENTS,
 	LEAK_SIZE_CLASSES,
 	TRAP_CONDITIONS,
 	TRAP_DISCHARGES,
 	TRAP_TEST_METHODS,
 	TRAP_TYPES
 } from './finding-vocabulary';
+import { INPUT_LIMITS, limitedNumber } from './ranges';
 
-const operatingHoursSchema = z
-	.number({ error: 'Operating hours must be a number of hours per year' })
-	.gt(0, { error: 'Operating hours must be greater than 0 h per year' })
-	.max(8784, { error: 'Operating hours cannot exceed 8784 h per year (a leap year)' });
+export type {
+	HeaderInputs,
+	InsulationInputs,
+	LeakInputs,
+	TrapInputs
+} from '../steam/losses/inputs';
+export type InsulationMaterial = InsulationMaterialInput;
+export type InsulationLayer = InsulationLayerInput;
+
+const TRAP = INPUT_LIMITS.trap;
+const LEAK = INPUT_LIMITS.leak;
+const INSULATION = INPUT_LIMITS.insulation;
+const LAYER = INPUT_LIMITS.layer;
+const HEADER = INPUT_LIMITS.header;
 
 /** A diameter in metres, > 0 and at most `max` m. */
 export const diameterSchema = (label: string, max: number) =>
-	z
-		.number({ error: `${label} must be a number (metres)` })
-		.positive({ error: `${label} must be greater than 0 m` })
-		.max(max, { error: `${label} must be at most ${max} m` });
-
-const emissivity = (label: string) =>
-	z
-		.number({ error: `${label} must be a number between 0 and 1` })
-		.gt(0, { error: `${label} must be greater than 0` })
-		.max(1, { error: `${label} cannot exceed 1` });
+	limitedNumber(label, { min: 0, max, exclusiveMin: true, quantity: 'shortLength', unit: 'm' });
 
 export const trapInputsSchema = z
 	.object({
-		trapType: z.enum(TRAP_TYPES, oneOf('Trap type', TRAP_TYPES)),
+		trapType: z.enum(TRAP_TYPES, { error: 'Choose the trap’s type' }),
 		/** Nominal connection size (DN); sets the default discharge orifice. */
 		dn: dnSchema,
 		/** Discharge orifice diameter, m; defaults from the size and type table when absent. */
-		orificeDiameter: diameterSchema('Orifice diameter', 0.05).optional(),
-		condition: z.enum(TRAP_CONDITIONS, oneOf('Trap condition', TRAP_CONDITIONS)),
-		discharge: z.enum(TRAP_DISCHARGES, oneOf('Discharge', TRAP_DISCHARGES)),
+		orificeDiameter: limitedNumber('Orifice diameter', TRAP.orificeDiameter).optional(),
+		condition: z.enum(TRAP_CONDITIONS, { error: 'Choose the trap’s condition' }),
+		discharge: z.enum(TRAP_DISCHARGES, { error: 'Choose where the trap discharges' }),
 		/** Pressure the trap discharges into, MPa absolute; required for a condensate return. */
-		backPressure: pressureSchema('Back pressure', 22).optional(),
-		testMethod: z.enum(TRAP_TEST_METHODS, oneOf('Test method', TRAP_TEST_METHODS)).optional(),
+		backPressure: limitedNumber('Back pressure', TRAP.backPressure).optional(),
+		testMethod: z.enum(TRAP_TEST_METHODS, { error: 'Choose how the trap was tested' }).optional(),
 		/** Hours per year this trap is live, overriding the site's operating hours. */
-		operatingHours: operatingHoursSchema.optional(),
+		operatingHours: limitedNumber('Operating hours', TRAP.operatingHours).optional(),
 		/** Condensate the trap passes, kg/s: priced as lost water and heat when it goes to drain. */
-		condensateLoad: z
-			.number({ error: 'Condensate load must be a number (kg/s)' })
-			.min(0, { error: 'Condensate load cannot be negative' })
-			.max(50, { error: 'Condensate load must be at most 50 kg/s' })
-			.optional()
+		condensateLoad: limitedNumber('Condensate load', TRAP.condensateLoad).optional(),
+		/** Temperature test readings either side of the trap, K. */
+		inletTemperature: limitedNumber('Inlet temperature', TRAP.inletTemperature).optional(),
+		outletTemperature: limitedNumber('Outlet temperature', TRAP.outletTemperature).optional()
 	})
 	.superRefine((trap, ctx) => {
 		if (trap.discharge === 'condensate-return' && trap.backPressure === undefined) {
@@ -62,15 +76,17 @@ export const trapInputsSchema = z
 			});
 		}
 	});
-export type TrapInputs = z.infer<typeof trapInputsSchema>;
+const _trap: Agrees<typeof trapInputsSchema, TrapInputs> = true;
 
 export const leakInputsSchema = z
 	.object({
 		/** Equivalent hole diameter, m: the round hole that would pass the same steam. */
-		holeDiameter: diameterSchema('Hole diameter', 0.1).optional(),
+		holeDiameter: limitedNumber('Hole diameter', LEAK.holeDiameter).optional(),
 		/** A size class chosen from the guidance when the hole cannot be measured. */
-		sizeClass: z.enum(LEAK_SIZE_CLASSES, oneOf('Leak size class', LEAK_SIZE_CLASSES)).optional(),
-		operatingHours: operatingHoursSchema.optional()
+		sizeClass: z.enum(LEAK_SIZE_CLASSES, { error: 'Choose the leak’s size' }).optional(),
+		/** Where on the line the leak is. */
+		component: z.enum(LEAK_COMPONENTS, { error: 'Choose where the leak is' }).optional(),
+		operatingHours: limitedNumber('Operating hours', LEAK.operatingHours).optional()
 	})
 	.superRefine((leak, ctx) => {
 		if (leak.holeDiameter === undefined && leak.sizeClass === undefined) {
@@ -81,80 +97,59 @@ export const leakInputsSchema = z
 			});
 		}
 	});
-export type LeakInputs = z.infer<typeof leakInputsSchema>;
+const _leak: Agrees<typeof leakInputsSchema, LeakInputs> = true;
 
 export const insulationMaterialSchema = z.union(
 	[
 		z.enum(INSULATION_MATERIALS),
-		z.object({
-			conductivity: z
-				.number({ error: 'Conductivity must be a number (W/(m K))' })
-				.positive({ error: 'Conductivity must be greater than 0 W/(m K)' })
-				.max(1, { error: 'Conductivity must be at most 1 W/(m K) for an insulation' })
-		})
+		z.object({ conductivity: limitedNumber('Conductivity', LAYER.conductivity) })
 	],
-	{
-		error: `Material must be one of ${INSULATION_MATERIALS.join(', ')} or a conductivity in W/(m K)`
-	}
+	{ error: 'Choose the insulation material, or give its conductivity in W/(m K)' }
 );
-export type InsulationMaterial = z.infer<typeof insulationMaterialSchema>;
+const _material: Agrees<typeof insulationMaterialSchema, InsulationMaterialInput> = true;
 
 export const insulationLayerSchema = z.object({
-	thickness: z
-		.number({ error: 'Layer thickness must be a number (metres)' })
-		.positive({ error: 'Layer thickness must be greater than 0 m' })
-		.max(0.5, { error: 'Layer thickness must be at most 0.5 m' }),
+	thickness: limitedNumber('Layer thickness', LAYER.thickness),
 	material: insulationMaterialSchema
 });
-export type InsulationLayer = z.infer<typeof insulationLayerSchema>;
+const _layer: Agrees<typeof insulationLayerSchema, InsulationLayerInput> = true;
 
 export const insulationInputsSchema = z
 	.object({
-		item: z.enum(INSULATION_ITEMS, oneOf('Item', INSULATION_ITEMS)),
+		item: z.enum(INSULATION_ITEMS, {
+			error: 'Choose what is bare: a pipe, valve, flange or surface'
+		}),
 		/** Nominal pipe size (DN) of the pipe, valve or flange pair. */
 		dn: dnSchema.optional(),
 		/** Bare outside diameter, m, when it is not a standard pipe size (wins over dn). */
-		outerDiameter: diameterSchema('Outer diameter', 3).optional(),
+		outerDiameter: limitedNumber('Outer diameter', INSULATION.outerDiameter).optional(),
 		/** Bare length, m (pipe). */
-		length: z
-			.number({ error: 'Length must be a number (metres)' })
-			.positive({ error: 'Length must be greater than 0 m' })
-			.max(10_000, { error: 'Length must be at most 10 000 m' })
-			.optional(),
+		length: limitedNumber('Length', INSULATION.length).optional(),
 		/** Number of bare valves or flange pairs. */
-		count: z
-			.number({ error: 'Count must be a whole number' })
-			.int({ error: 'Count must be a whole number' })
-			.min(1, { error: 'Count must be at least 1' })
-			.max(10_000, { error: 'Count must be at most 10 000' })
-			.optional(),
+		count: limitedNumber('Count', INSULATION.count).optional(),
 		/** Height of a flat surface, m: the run the warm air rises along. */
-		height: z
-			.number({ error: 'Height must be a number (metres)' })
-			.positive({ error: 'Height must be greater than 0 m' })
-			.max(50, { error: 'Height must be at most 50 m' })
-			.optional(),
+		height: limitedNumber('Height', INSULATION.height).optional(),
 		/** Bare area, m² (flat surface: tank, vessel, heat-exchanger shell). */
-		area: z
-			.number({ error: 'Area must be a number (m²)' })
-			.positive({ error: 'Area must be greater than 0 m²' })
-			.max(100_000, { error: 'Area must be at most 100 000 m²' })
-			.optional(),
+		area: limitedNumber('Area', INSULATION.area).optional(),
 		/** Process temperature, K; when absent, the header's steam temperature. */
-		processTemperature: temperatureSchema('Process temperature', 273.15, 923.15).optional(),
-		ambientTemperature: temperatureSchema('Ambient temperature', 223.15, 333.15),
-		windSpeed: z
-			.number({ error: 'Wind speed must be a number (m/s)' })
-			.min(0, { error: 'Wind speed cannot be negative' })
-			.max(35, { error: 'Wind speed must be at most 35 m/s' }),
+		processTemperature: limitedNumber(
+			'Process temperature',
+			INSULATION.processTemperature
+		).optional(),
+		ambientTemperature: limitedNumber('Ambient temperature', INSULATION.ambientTemperature),
+		windSpeed: limitedNumber('Wind speed', INSULATION.windSpeed),
 		/** Proposed insulation, innermost layer first. */
 		layers: z
 			.array(insulationLayerSchema, { error: 'Layers must be a list' })
 			.min(1, { error: 'Propose at least one insulation layer' })
 			.max(4, { error: 'At most 4 insulation layers' }),
-		jacketEmissivity: emissivity('Jacket emissivity'),
-		bareEmissivity: emissivity('Bare-surface emissivity'),
-		operatingHours: operatingHoursSchema.optional()
+		jacketEmissivity: limitedNumber('Jacket emissivity', INSULATION.jacketEmissivity),
+		bareEmissivity: limitedNumber('Bare-surface emissivity', INSULATION.bareEmissivity),
+		operatingHours: limitedNumber('Operating hours', INSULATION.operatingHours).optional(),
+		/** What is there today; damaged and wet insulation are priced as bare. */
+		surfaceState: z
+			.enum(INSULATION_STATES, { error: 'Choose what the surface is like today' })
+			.optional()
 	})
 	.superRefine((ins, ctx) => {
 		const issue = (path: string, message: string) =>
@@ -163,7 +158,7 @@ export const insulationInputsSchema = z
 			if (ins.area === undefined) issue('area', 'A flat surface needs its bare area in m²');
 			if (ins.height === undefined) issue('height', 'A flat surface needs its height in metres');
 		} else if (ins.dn === undefined && ins.outerDiameter === undefined) {
-			issue('dn', `A ${ins.item} needs a nominal size (DN) or an outer diameter`);
+			issue('dn', `${ITEM_WORDS[ins.item]} needs a nominal size (DN) or an outer diameter`);
 		} else if (ins.outerDiameter === undefined && ins.dn !== undefined && ins.dn < 15) {
 			issue('dn', 'Pipe sizes for insulation start at DN 15 (NPS 1/2); give the outer diameter');
 		}
@@ -177,12 +172,14 @@ export const insulationInputsSchema = z
 			issue('processTemperature', 'Process temperature must be above the ambient temperature');
 		}
 	});
-export type InsulationInputs = z.infer<typeof insulationInputsSchema>;
+const _insulation: Agrees<typeof insulationInputsSchema, InsulationInputs> = true;
+
+const ITEM_WORDS = { pipe: 'A pipe', valve: 'A valve', 'flange-pair': 'A flange pair' } as const;
 
 export const headerInputsSchema = z.object({
 	/** Measured line pressure, MPa absolute (the form converts gauge with the site's atmosphere). */
-	measuredPressure: pressureSchema('Measured pressure', 22),
+	measuredPressure: limitedNumber('Measured pressure', HEADER.measuredPressure),
 	/** Measured line temperature, K, when a thermometer reading was taken. */
-	measuredTemperature: temperatureSchema('Measured temperature', 273.16, 1073.15).optional()
+	measuredTemperature: limitedNumber('Measured temperature', HEADER.measuredTemperature).optional()
 });
-export type HeaderInputs = z.infer<typeof headerInputsSchema>;
+const _header: Agrees<typeof headerInputsSchema, HeaderInputs> = true;

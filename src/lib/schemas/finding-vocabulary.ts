@@ -1,10 +1,46 @@
 /**
  * The words a finding is recorded in: kinds, lifecycle statuses, trap types and conditions,
- * leak size classes and insulation items. Shared by the schemas, the forms and the engine.
+ * leak size classes and components, insulation items, materials and states. The ids the engine
+ * prices by are the engine's own (src/lib/steam/vocabulary.ts), re-exported here; lifecycle
+ * statuses and the words people read for every id (`*_LABELS`) live here.
  */
+import type {
+	FindingKind,
+	InsulationItem,
+	InsulationMaterialName,
+	InsulationState,
+	LeakComponent,
+	LeakSizeClass,
+	TrapCondition,
+	TrapDischarge,
+	TrapTestMethod,
+	TrapType
+} from '../steam/vocabulary';
 
-export const FINDING_KINDS = ['trap', 'leak', 'insulation', 'header'] as const;
-export type FindingKind = (typeof FINDING_KINDS)[number];
+export {
+	FINDING_KINDS,
+	INSULATION_ITEMS,
+	INSULATION_MATERIALS,
+	INSULATION_STATES,
+	LEAK_COMPONENTS,
+	LEAK_SIZE_CLASSES,
+	TRAP_CONDITIONS,
+	TRAP_DISCHARGES,
+	TRAP_TEST_METHODS,
+	TRAP_TYPES
+} from '../steam/vocabulary';
+export type {
+	FindingKind,
+	InsulationItem,
+	InsulationMaterialName,
+	InsulationState,
+	LeakComponent,
+	LeakSizeClass,
+	TrapCondition,
+	TrapDischarge,
+	TrapTestMethod,
+	TrapType
+};
 
 /** Lifecycle: draft (field) → reviewed (desk) → published → approved/scheduled/repaired/declined → verified. */
 export const FINDING_STATUSES = [
@@ -18,52 +54,6 @@ export const FINDING_STATUSES = [
 	'verified'
 ] as const;
 export type FindingStatus = (typeof FINDING_STATUSES)[number];
-
-export const TRAP_TYPES = [
-	'thermodynamic',
-	'float-thermostatic',
-	'inverted-bucket',
-	'thermostatic',
-	'bimetallic',
-	'fixed-orifice',
-	'other'
-] as const;
-export type TrapType = (typeof TRAP_TYPES)[number];
-
-export const TRAP_CONDITIONS = [
-	'working',
-	'leaking',
-	'failed-open',
-	'failed-closed',
-	'flooded',
-	'out-of-service',
-	'not-accessible'
-] as const;
-export type TrapCondition = (typeof TRAP_CONDITIONS)[number];
-
-export const TRAP_DISCHARGES = ['atmosphere', 'condensate-return'] as const;
-export type TrapDischarge = (typeof TRAP_DISCHARGES)[number];
-
-export const TRAP_TEST_METHODS = ['ultrasound', 'temperature', 'visual', 'combined'] as const;
-export type TrapTestMethod = (typeof TRAP_TEST_METHODS)[number];
-
-/** Leak size classes by what the auditor sees; the engine maps each to a hole diameter. */
-export const LEAK_SIZE_CLASSES = ['pinhole', 'small', 'medium', 'large', 'very-large'] as const;
-export type LeakSizeClass = (typeof LEAK_SIZE_CLASSES)[number];
-
-export const INSULATION_ITEMS = ['pipe', 'valve', 'flange-pair', 'surface'] as const;
-export type InsulationItem = (typeof INSULATION_ITEMS)[number];
-
-export const INSULATION_MATERIALS = ['mineral-wool', 'calcium-silicate', 'cellular-glass'] as const;
-export type InsulationMaterialName = (typeof INSULATION_MATERIALS)[number];
-
-/** Where on the line a leak is. */
-export const LEAK_COMPONENTS = ['valve-stem', 'flange', 'fitting', 'pipe', 'other'] as const;
-export type LeakComponent = (typeof LEAK_COMPONENTS)[number];
-
-/** What the auditor found on the surface today. */
-export const INSULATION_STATES = ['bare', 'damaged', 'wet'] as const;
-export type InsulationState = (typeof INSULATION_STATES)[number];
 
 // Words people read for each stored id: raw ids never reach a screen.
 

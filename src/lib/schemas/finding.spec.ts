@@ -13,7 +13,9 @@ const common = {
 	headerId: 'c1d2e3f4-a5b6-4c7d-8e9f-0a1b2c3d4e5f',
 	location: 'Dryer hall, column B4',
 	notes: '',
+	photoIds: [],
 	status: 'draft',
+	reviewed: false,
 	version: 1,
 	createdAt: '2025-03-04T09:15:00.000Z',
 	updatedAt: '2025-03-04T09:15:00.000Z',
@@ -75,7 +77,7 @@ describe('findingSchema', () => {
 
 	it('rejects an unknown kind and an unknown status', () => {
 		expect(messages(findingSchema.safeParse({ ...common, kind: 'valve', inputs: {} }))).toContain(
-			'kind: Kind must be one of: trap, leak, insulation, header'
+			'kind: Choose what the finding is: a trap test, a leak, an insulation gap or a header reading'
 		);
 		const status = findingSchema.safeParse({
 			...common,
@@ -83,7 +85,7 @@ describe('findingSchema', () => {
 			kind: 'trap',
 			inputs: trap
 		});
-		expect(messages(status)[0]).toMatch(/^status: Status must be one of: draft, reviewed/);
+		expect(messages(status)).toEqual(['status: Choose where this finding stands']);
 	});
 
 	it('needs a header except for insulation with its own process temperature', () => {
@@ -93,7 +95,7 @@ describe('findingSchema', () => {
 		).toContain('headerId: Choose the header this trap is on');
 		expect(
 			messages(findingSchema.safeParse({ ...noHeader, kind: 'insulation', inputs: insulation }))
-		).toContain('headerId: Choose the header this item carries, or give its process temperature');
+		).toContain('headerId: Choose the header this item carries, or give its surface temperature');
 		const own = { ...insulation, processTemperature: 453.15 };
 		expect(findingSchema.safeParse({ ...noHeader, kind: 'insulation', inputs: own }).success).toBe(
 			true
@@ -117,11 +119,11 @@ describe('findingSchema', () => {
 			'id: Must be a UUID'
 		);
 		expect(messages(findingSchema.safeParse({ ...base, createdAt: '4 March 2025' }))).toContain(
-			'createdAt: Created at must be an ISO 8601 date-time'
+			'createdAt: Recorded at must be a date and time'
 		);
 		expect(
 			messages(findingSchema.safeParse({ ...base, updatedAt: '2025-03-03T09:15:00.000Z' }))
-		).toContain('updatedAt: Updated at cannot be before created at');
+		).toContain('updatedAt: A finding cannot be changed before it was recorded');
 		expect(
 			findingSchema.safeParse({ ...base, updatedAt: '2025-03-04T10:15:00.000+01:00' }).success
 		).toBe(true);
@@ -149,17 +151,17 @@ describe('trapInputsSchema', () => {
 		expect(messages(trapInputsSchema.safeParse({ ...trap, orificeDiameter: -0.004 }))).toContain(
 			'orificeDiameter: Orifice diameter must be greater than 0 m'
 		);
-		expect(messages(trapInputsSchema.safeParse({ ...trap, dn: 17 }))[0]).toMatch(
-			/^dn: Nominal size must be a standard DN: 6, 8, 10, 15/
-		);
-		expect(messages(trapInputsSchema.safeParse({ ...trap, condition: 'broken' }))[0]).toBe(
-			'condition: Trap condition must be one of: working, leaking, failed-open, failed-closed, flooded, out-of-service, not-accessible'
-		);
+		expect(messages(trapInputsSchema.safeParse({ ...trap, dn: 17 }))).toEqual([
+			'dn: Choose a standard nominal size'
+		]);
+		expect(messages(trapInputsSchema.safeParse({ ...trap, condition: 'broken' }))).toEqual([
+			'condition: Choose the trap’s condition'
+		]);
 	});
 
 	it('bounds the operating-hours override', () => {
 		expect(messages(trapInputsSchema.safeParse({ ...trap, operatingHours: 9000 }))).toContain(
-			'operatingHours: Operating hours cannot exceed 8784 h per year (a leap year)'
+			'operatingHours: Operating hours must be at most 8784 h per year'
 		);
 	});
 });
@@ -196,7 +198,7 @@ describe('insulationInputsSchema', () => {
 					count: 2
 				})
 			)
-		).toContain('dn: A flange-pair needs a nominal size (DN) or an outer diameter');
+		).toContain('dn: A flange pair needs a nominal size (DN) or an outer diameter');
 		expect(
 			messages(insulationInputsSchema.safeParse({ ...insulation, item: 'surface' }))
 		).toContain('area: A flat surface needs its bare area in m²');
@@ -225,7 +227,7 @@ describe('insulationInputsSchema', () => {
 		expect(insulationInputsSchema.safeParse(custom).success).toBe(true);
 		const unknown = { ...insulation, layers: [{ thickness: 0.04, material: 'straw' }] };
 		expect(messages(insulationInputsSchema.safeParse(unknown))).toContain(
-			'layers.0.material: Material must be one of mineral-wool, calcium-silicate, cellular-glass or a conductivity in W/(m K)'
+			'layers.0.material: Choose the insulation material, or give its conductivity in W/(m K)'
 		);
 		const negative = { ...insulation, layers: [{ thickness: -0.01, material: 'mineral-wool' }] };
 		expect(messages(insulationInputsSchema.safeParse(negative))).toContain(
@@ -239,7 +241,7 @@ describe('insulationInputsSchema', () => {
 	it('checks emissivities, wind and a process temperature above ambient', () => {
 		expect(
 			messages(insulationInputsSchema.safeParse({ ...insulation, bareEmissivity: 1.2 }))
-		).toContain('bareEmissivity: Bare-surface emissivity cannot exceed 1');
+		).toContain('bareEmissivity: Bare-surface emissivity must be at most 1');
 		expect(messages(insulationInputsSchema.safeParse({ ...insulation, windSpeed: -2 }))).toContain(
 			'windSpeed: Wind speed cannot be negative'
 		);

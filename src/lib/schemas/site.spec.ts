@@ -48,7 +48,7 @@ describe('costBasisSchema', () => {
 			fuel: { kind: 'coal', price: '3', unit: 'L' }
 		});
 		expect(messages(result)).toContain(
-			'fuel.unit: A coal price cannot be per L; use one of: GJ, MMBtu, therm, kWh, MWh, kg, t, short-ton'
+			'fuel.unit: Coal (bituminous) cannot be priced per litre: choose GJ, MMBtu, therm, kWh, MWh, kg, tonne or short ton'
 		);
 	});
 
@@ -59,7 +59,7 @@ describe('costBasisSchema', () => {
 			emissionFactor: 60
 		});
 		expect(messages(result)[0]).toMatch(
-			/^fuel.unit: An electricity price cannot be per m3; use one of: GJ, MMBtu, therm, kWh, MWh$/
+			/^fuel.unit: Electricity cannot be priced per m³: choose GJ, MMBtu, therm, kWh or MWh$/
 		);
 	});
 
@@ -84,7 +84,7 @@ describe('costBasisSchema', () => {
 			fuel: { kind: 'custom', price: '40', unit: 'kg' }
 		});
 		expect(messages(without)).toContain(
-			'fuel.energyContent: There is no standard energy content for custom per kg: enter it in GJ per kg'
+			'fuel.energyContent: There is no standard energy content for custom fuel per kg: enter it in GJ per kg'
 		);
 		const withContent = costBasisSchema.safeParse({
 			...base,
@@ -99,7 +99,7 @@ describe('costBasisSchema', () => {
 			fuel: { kind: 'coal', price: '120', unit: 't' }
 		});
 		expect(messages(coal)).toContain(
-			'fuel.energyContent: There is no standard energy content for coal per t: enter it in GJ per t'
+			'fuel.energyContent: There is no standard energy content for coal (bituminous) per tonne: enter it in GJ per tonne'
 		);
 	});
 

@@ -10,27 +10,48 @@ import {
 	temperatureSchema,
 	uuidSchema
 } from './common';
-import { defaultEnergyContent } from '../steam/losses/fuels';
+import { defaultEnergyContent, FUELS } from '../steam/losses/fuels';
+import type {
+	CostBasis as EngineCostBasis,
+	Fuel as EngineFuel,
+	Header as EngineHeader,
+	TrapFactors as EngineTrapFactors
+} from '../steam/losses/inputs';
+import {
+	ENERGY_PRICE_UNITS,
+	FUEL_KINDS,
+	FUEL_PRICE_UNITS,
+	QUANTITY_PRICE_UNITS,
+	type EnergyPriceUnit,
+	type FuelKind,
+	type FuelPriceUnit,
+	type QuantityPriceUnit
+} from '../steam/vocabulary';
+import type { Agrees } from './agrees';
 
-export const FUEL_KINDS = [
-	'natural-gas',
-	'fuel-oil-2',
-	'fuel-oil-6',
-	'lpg',
-	'coal',
-	'biomass',
-	'electricity',
-	'custom'
-] as const;
-export type FuelKind = (typeof FUEL_KINDS)[number];
+export { ENERGY_PRICE_UNITS, FUEL_KINDS, FUEL_PRICE_UNITS, QUANTITY_PRICE_UNITS };
+export type { EnergyPriceUnit, FuelKind, FuelPriceUnit, QuantityPriceUnit };
 
-/** Units a fuel can be priced in: energy units suit every fuel; the others suit some. */
-export const ENERGY_PRICE_UNITS = ['GJ', 'MMBtu', 'therm', 'kWh', 'MWh'] as const;
-export const QUANTITY_PRICE_UNITS = ['m3', 'Mcf', 'L', 'US-gal', 'kg', 't', 'short-ton'] as const;
-export const FUEL_PRICE_UNITS = [...ENERGY_PRICE_UNITS, ...QUANTITY_PRICE_UNITS] as const;
-export type EnergyPriceUnit = (typeof ENERGY_PRICE_UNITS)[number];
-export type QuantityPriceUnit = (typeof QUANTITY_PRICE_UNITS)[number];
-export type FuelPriceUnit = (typeof FUEL_PRICE_UNITS)[number];
+/** The words people read for each fuel (the engine's own names for them). */
+export const FUEL_KIND_LABELS: Record<FuelKind, string> = Object.fromEntries(
+	FUEL_KINDS.map((kind) => [kind, FUELS[kind].label])
+) as Record<FuelKind, string>;
+
+/** The words people read for each price unit. */
+export const FUEL_PRICE_UNIT_LABELS: Record<FuelPriceUnit, string> = {
+	GJ: 'GJ',
+	MMBtu: 'MMBtu',
+	therm: 'therm',
+	kWh: 'kWh',
+	MWh: 'MWh',
+	m3: 'm³',
+	Mcf: 'Mcf (thousand cubic feet)',
+	L: 'litre',
+	'US-gal': 'US gallon',
+	kg: 'kg',
+	t: 'tonne',
+	'short-ton': 'short ton'
+};
 
 /** Which quantity units make sense for each fuel (any energy unit always does). */
 export const QUANTITY_UNITS_BY_FUEL: Record<FuelKind, readonly QuantityPriceUnit[]> = {
@@ -52,12 +73,10 @@ export function isEnergyPriceUnit(unit: FuelPriceUnit): unit is EnergyPriceUnit 
 
 export const fuelSchema = z
 	.object({
-		kind: z.enum(FUEL_KINDS, { error: `Fuel must be one of: ${FUEL_KINDS.join(', ')}` }),
+		kind: z.enum(FUEL_KINDS, { error: 'Choose the fuel the boilers burn' }),
 		/** Price per `unit`, in the cost basis currency. */
 		price: decimalStringSchema,
-		unit: z.enum(FUEL_PRICE_UNITS, {
-			error: `Fuel price unit must be one of: ${FUEL_PRICE_UNITS.join(', ')}`
-		}),
+		unit: z.enum(FUEL_PRICE_UNITS, { error: 'Choose the unit the fuel is priced in' }),
 		/**
 		 * Energy content in GJ per priced unit (higher heating value), overriding the fuel's
 		 * default. Required for a quantity unit without a published default (custom fuels,
@@ -71,27 +90,28 @@ export const fuelSchema = z
 	})
 	.superRefine((fuel, ctx) => {
 		if (isEnergyPriceUnit(fuel.unit)) return;
+		const fuelName = FUEL_KIND_LABELS[fuel.kind];
+		const unitName = FUEL_PRICE_UNIT_LABELS[fuel.unit];
 		if (!QUANTITY_UNITS_BY_FUEL[fuel.kind].includes(fuel.unit)) {
-			const allowed = [...ENERGY_PRICE_UNITS, ...QUANTITY_UNITS_BY_FUEL[fuel.kind]];
+			const allowed = [...ENERGY_PRICE_UNITS, ...QUANTITY_UNITS_BY_FUEL[fuel.kind]].map(
+				(unit) => FUEL_PRICE_UNIT_LABELS[unit]
+			);
 			ctx.addIssue({
 				code: 'custom',
 				path: ['unit'],
-				message: `${article(fuel.kind)} ${fuel.kind} price cannot be per ${fuel.unit}; use one of: ${allowed.join(', ')}`
+				message: `${fuelName} cannot be priced per ${unitName}: choose ${allowed.slice(0, -1).join(', ')} or ${allowed.at(-1)}`
 			});
 		}
 		if (fuel.energyContent === undefined && defaultEnergyContent(fuel.kind, fuel.unit) === null) {
 			ctx.addIssue({
 				code: 'custom',
 				path: ['energyContent'],
-				message: `There is no standard energy content for ${fuel.kind} per ${fuel.unit}: enter it in GJ per ${fuel.unit}`
+				message: `There is no standard energy content for ${fuelName.toLowerCase()} per ${unitName}: enter it in GJ per ${unitName}`
 			});
 		}
 	});
 export type Fuel = z.infer<typeof fuelSchema>;
-
-function article(word: string): string {
-	return /^[aeiou]/i.test(word) ? 'An' : 'A';
-}
+const _fuel: Agrees<typeof fuelSchema, EngineFuel> = true;
 
 const fraction = (label: string) =>
 	z
@@ -107,6 +127,7 @@ export const trapFactorsSchema = z.object({
 	leaking: fraction('Leaking-trap fraction').optional()
 });
 export type TrapFactors = z.infer<typeof trapFactorsSchema>;
+const _trapFactors: Agrees<typeof trapFactorsSchema, EngineTrapFactors> = true;
 
 export const costBasisSchema = z
 	.object({
@@ -173,6 +194,7 @@ export const costBasisSchema = z
 		}
 	});
 export type CostBasis = z.infer<typeof costBasisSchema>;
+const _costBasis: Agrees<typeof costBasisSchema, EngineCostBasis> = true;
 
 export const headerSchema = z.object({
 	id: uuidSchema,
@@ -187,6 +209,7 @@ export const headerSchema = z.object({
 	designTemperature: temperatureSchema('Design temperature', 273.16, 1073.15).optional()
 });
 export type Header = z.infer<typeof headerSchema>;
+const _header: Agrees<typeof headerSchema, EngineHeader> = true;
 
 export const headerListSchema = z.array(headerSchema).superRefine((headers, ctx) => {
 	const ids = new Set<string>();

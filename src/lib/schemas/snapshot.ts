@@ -48,10 +48,10 @@ export type Area = z.infer<typeof areaSchema>;
 
 /** What a trap asset keeps from survey to survey (the last capture's trap details). */
 export const trapAssetDetailsSchema = z.object({
-	trapType: z.enum(TRAP_TYPES),
+	trapType: z.enum(TRAP_TYPES, { error: 'Choose the trap’s type' }),
 	dn: dnSchema,
 	orificeDiameter: diameterSchema('Orifice diameter', 0.05).optional(),
-	discharge: z.enum(TRAP_DISCHARGES).optional(),
+	discharge: z.enum(TRAP_DISCHARGES, { error: 'Choose where the trap discharges' }).optional(),
 	backPressure: z.number().positive().optional()
 });
 export type TrapAssetDetails = z.infer<typeof trapAssetDetailsSchema>;
@@ -62,7 +62,7 @@ export const lastResultSchema = z.object({
 	surveyName: z.string(),
 	findingId: uuidSchema,
 	testedAt: isoDateTime('Tested at'),
-	condition: z.enum(TRAP_CONDITIONS)
+	condition: z.enum(TRAP_CONDITIONS, { error: 'Choose the trap’s condition' })
 });
 export type LastResult = z.infer<typeof lastResultSchema>;
 
@@ -84,7 +84,7 @@ export const findingSnapshotSchema = z.object({
 	capture: findingCaptureSchema,
 	/** Server version: the base version of the device's next edit. */
 	version: z.number().int().positive(),
-	status: z.enum(FINDING_STATUSES)
+	status: z.enum(FINDING_STATUSES, { error: 'Choose where this finding stands' })
 });
 export type FindingSnapshot = z.infer<typeof findingSnapshotSchema>;
 
@@ -123,4 +123,3 @@ export const walkPersonSchema = z.object({
 	unitSystem: z.enum(unitSystems)
 });
 export type WalkPerson = z.infer<typeof walkPersonSchema>;
-

@@ -9,5 +9,6 @@ export { stateFromPT } from './forward';
 export { stateFromPH, stateFromPS } from './inverse';
 export { saturatedLiquid, saturatedVapour, stateFromPX, stateFromTX } from './saturation';
 export type { Phase, Properties, Region, SteamState } from './types';
+export * from './vocabulary';
 export * from './losses/index';
 export * from './heat/index';

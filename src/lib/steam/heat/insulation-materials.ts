@@ -8,13 +8,14 @@
  * here, so they can be compared with the documents line by line.
  */
 import { SteamRangeError } from '../errors';
+import type { InsulationMaterialName } from '../vocabulary';
 import { fahrenheitToKelvin } from './constants';
 import { positiveUpTo } from './validate';
 
 /** 1 Btu_IT·in/(h·ft²·°F) in W/(m K): 1055.05585262 J × 0.0254 m / (3600 s × 0.09290304 m² × 5/9 K). */
 export const BTU_IN_PER_HR_FT2_F = (1055.05585262 * 0.0254) / (3600 * 0.09290304 * (5 / 9));
 
-export type NamedMaterial = 'mineral-wool' | 'calcium-silicate' | 'cellular-glass';
+export type NamedMaterial = InsulationMaterialName;
 
 /** A custom material with a constant conductivity [W/(m K)] and, optionally, its maximum use temperature [K]. */
 export interface CustomMaterial {

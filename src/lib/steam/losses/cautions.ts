@@ -2,7 +2,7 @@
  * Safety cautions carried with every result that involves live steam, pressure or hot
  * surfaces (DESIGN.md "Safety"). Wording is ours; the substance is the trade's usual care.
  */
-import type { FindingKind, TrapCondition } from '../../schemas/finding';
+import type { FindingKind, TrapCondition } from '../vocabulary';
 
 export type CautionKey =
 	| 'steam-plume'

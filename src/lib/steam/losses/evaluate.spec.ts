@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import type { Finding } from '../../schemas/finding';
 import {
 	findingCommon,
 	lossCostBasis as costBasis,
@@ -7,7 +6,8 @@ import {
 	mainsHeader as header,
 	superheatedHeader as hp
 } from '../../../../tests/fixtures/loss-site';
-import { saturationTemperature } from '../index';
+import { saturationTemperature } from '../region4';
+import type { FindingInput as Finding } from './inputs';
 import { evaluateFinding, type FindingEvaluation } from './evaluate';
 
 const common = { ...findingCommon, headerId: header.id };

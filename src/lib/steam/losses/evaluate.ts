@@ -3,13 +3,12 @@
  * cost, CO2, water, payback, risk, cautions and the sourced assumptions behind the numbers.
  * The device and the server call this same function; the server never trusts a device's sums.
  */
-import type { Finding } from '../../schemas/finding';
-import type { CostBasis, Header } from '../../schemas/site';
 import { type Caution, cautionsFor } from './cautions';
 import { annualLoss, fuelPower, steamFuelCostPerTonne } from './energy-chain';
 import { netPresentValue, type Payback, simplePayback } from './economics';
 import { headerLoss, insulationLoss, leakLoss, type LossCore, trapLoss } from './finding-losses';
 import type { HeaderReading } from './header';
+import type { CostBasis, FindingInput, Header } from './inputs';
 import type { InsulationGap } from './insulation';
 import { fromMinorUnits, money, type Money } from './money';
 import type { OrificeFlow } from './orifice';
@@ -18,13 +17,14 @@ import type { Assumption } from './sourced';
 
 /** What evaluateFinding needs from a site (validated by siteBasisSchema at the edges). */
 export interface SiteInput {
-	costBasis: CostBasis;
+	/** null until the consultant sets it: evaluateFinding then throws a plain message. */
+	costBasis: CostBasis | null;
 	headers: readonly Header[];
 }
 
 export interface FindingEvaluation {
 	findingId: string;
-	kind: Finding['kind'];
+	kind: FindingInput['kind'];
 	/** Steam lost, kg/h; null for heat losses and readings, which lose no steam as such. */
 	steamLoss: number | null;
 	/** Heat the boiler must replace, kW. */
@@ -61,11 +61,12 @@ export interface FindingEvaluation {
  * Prices a finding against its site's cost basis and header list.
  * Throws a plain Error for a missing cost basis or header, or any input out of range.
  */
-export function evaluateFinding(finding: Finding, site: SiteInput): FindingEvaluation {
+export function evaluateFinding(finding: FindingInput, site: SiteInput): FindingEvaluation {
 	if (site === null || site === undefined)
 		throw new Error('No site given: a finding is priced against its site');
 	const basis = resolveBasis(site.costBasis);
-	const context = { basis, costBasis: site.costBasis, headers: site.headers ?? [] };
+	const costBasis = site.costBasis!; // resolveBasis has thrown when it is missing
+	const context = { basis, costBasis, headers: site.headers ?? [] };
 	const core = lossFor(finding, context);
 	const fuelW = fuelPower(core.heatRate, basis.boilerEfficiency);
 	const year = annualLoss(fuelW, core.makeupFlow, {
@@ -83,7 +84,7 @@ export function evaluateFinding(finding: Finding, site: SiteInput): FindingEvalu
 			: repair === null
 				? { years: null, note: 'No repair cost yet' }
 				: simplePayback(repair, year.totalCost);
-	const { discountRate, lifeYears } = site.costBasis;
+	const { discountRate, lifeYears } = costBasis;
 	const npv =
 		repair !== null &&
 		finding.kind !== 'header' &&
@@ -140,7 +141,7 @@ export function evaluateFinding(finding: Finding, site: SiteInput): FindingEvalu
 	};
 }
 
-function lossFor(finding: Finding, context: Parameters<typeof trapLoss>[1]): LossCore {
+function lossFor(finding: FindingInput, context: Parameters<typeof trapLoss>[1]): LossCore {
 	switch (finding.kind) {
 		case 'trap':
 			return trapLoss(finding, context);

@@ -2,16 +2,18 @@
  * Each kind of finding turned into the flows the energy chain prices: steam and condensate
  * lost, heat lost, makeup water, plus notes, risk and the assumptions behind them.
  */
-import type {
-	HeaderFinding,
-	InsulationFinding,
-	LeakFinding,
-	TrapFinding
-} from '../../schemas/finding';
-import type { CostBasis, Header } from '../../schemas/site';
-import { saturatedLiquid, saturationTemperature } from '../index';
+import { saturationTemperature } from '../region4';
+import { saturatedLiquid } from '../saturation';
 import { condensateHeatRate, steamHeatRate } from './energy-chain';
 import { type HeaderReading, readHeader, SATURATION_TOLERANCE } from './header';
+import type {
+	CostBasis,
+	Header,
+	HeaderFindingInput,
+	InsulationFindingInput,
+	LeakFindingInput,
+	TrapFindingInput
+} from './inputs';
 import { type InsulationGap, insulationGap } from './insulation';
 import { leakSteamLoss } from './leaks';
 import type { OrificeFlow } from './orifice';
@@ -63,7 +65,10 @@ function headerAssumptions(header: Header, enthalpy: number): Assumption[] {
 	];
 }
 
-export function trapLoss(finding: TrapFinding, { basis, costBasis, headers }: Context): LossCore {
+export function trapLoss(
+	finding: TrapFindingInput,
+	{ basis, costBasis, headers }: Context
+): LossCore {
 	const inputs = finding.inputs;
 	const header = findHeader(headers, finding.headerId);
 	const steam = headerSteam(header);
@@ -119,7 +124,7 @@ export function trapLoss(finding: TrapFinding, { basis, costBasis, headers }: Co
 	};
 }
 
-export function leakLoss(finding: LeakFinding, { basis, headers }: Context): LossCore {
+export function leakLoss(finding: LeakFindingInput, { basis, headers }: Context): LossCore {
 	const header = findHeader(headers, finding.headerId);
 	const steam = headerSteam(header);
 	const loss = leakSteamLoss(finding.inputs, steam.pressure, basis.atmosphere, steam.temperature);
@@ -139,7 +144,10 @@ export function leakLoss(finding: LeakFinding, { basis, headers }: Context): Los
 	};
 }
 
-export function insulationLoss(finding: InsulationFinding, { basis, headers }: Context): LossCore {
+export function insulationLoss(
+	finding: InsulationFindingInput,
+	{ basis, headers }: Context
+): LossCore {
 	const inputs = finding.inputs;
 	const assumptions: Assumption[] = [];
 	let process = inputs.processTemperature;
@@ -193,7 +201,7 @@ export function insulationLoss(finding: InsulationFinding, { basis, headers }: C
 /** Relative departure from the listed header pressure worth reporting (common practice). */
 const PRESSURE_DEVIATION = 0.1;
 
-export function headerLoss(finding: HeaderFinding, { basis, headers }: Context): LossCore {
+export function headerLoss(finding: HeaderFindingInput, { basis, headers }: Context): LossCore {
 	const header = findHeader(headers, finding.headerId);
 	const { measuredPressure, measuredTemperature } = finding.inputs;
 	const reading = readHeader(measuredPressure, measuredTemperature);

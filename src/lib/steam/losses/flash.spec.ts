@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { saturationTemperature } from '../index';
+import { saturationTemperature } from '../region4';
 import { flashSteamFraction } from './flash';
 
 describe('flashSteamFraction', () => {

@@ -3,7 +3,9 @@
  * let-down is isenthalpic, so the flashed fraction is x = (h₁ − h_f,low) / h_fg,low, with h₁
  * the condensate's enthalpy (saturated liquid at the high pressure unless a temperature is given).
  */
-import { saturatedLiquid, saturatedVapour, saturationTemperature, stateFromPT } from '../index';
+import { stateFromPT } from '../forward';
+import { saturationTemperature } from '../region4';
+import { saturatedLiquid, saturatedVapour } from '../saturation';
 import { requirePositive } from './sourced';
 
 export interface FlashInput {

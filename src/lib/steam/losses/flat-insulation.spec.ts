@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { flatSurfaceHeatLoss } from '../heat/index';
+import { flatSurfaceHeatLoss } from '../heat/flat-surface';
 import { insulatedFlatSurfaceHeatLoss } from './flat-insulation';
 
 const base = {

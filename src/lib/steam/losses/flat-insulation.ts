@@ -4,15 +4,15 @@
  * convection plus radiation, solved for the jacket temperature as ASTM C680 prescribes for
  * flat systems. The pipe case lives in ../heat/insulated-pipe.ts; this is its planar twin.
  */
+import { flatSurfaceHeatLoss } from '../heat/flat-surface';
+import type { InsulationLayer } from '../heat/insulated-pipe';
 import {
 	conductivityAt,
 	conductivityIntegral,
-	findRoot,
-	flatSurfaceHeatLoss,
 	materialData,
-	type InsulationLayer,
 	type MaterialData
-} from '../heat/index';
+} from '../heat/insulation-materials';
+import { findRoot } from '../heat/root-finding';
 import { requirePositive } from './sourced';
 
 export interface InsulatedFlatInput {

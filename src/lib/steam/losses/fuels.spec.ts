@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Fuel } from '../../schemas/site';
+import type { Fuel } from './inputs';
 import {
 	ENERGY_UNIT_GJ,
 	FUELS,

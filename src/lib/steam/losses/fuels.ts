@@ -3,15 +3,9 @@
  * values (HHV), the basis of the US EPA and 40 CFR 98 factors used here, so fuel energy,
  * price per GJ and emissions stay on one basis.
  */
-import type {
-	CostBasis,
-	EnergyPriceUnit,
-	Fuel,
-	FuelKind,
-	FuelPriceUnit,
-	QuantityPriceUnit
-} from '../../schemas/site';
+import type { EnergyPriceUnit, FuelKind, FuelPriceUnit, QuantityPriceUnit } from '../vocabulary';
 import { BTU_IT_J, FT_M, GAL_US_M3, THERM_J } from '../../units/constants';
+import type { CostBasis, Fuel } from './inputs';
 import type { Sourced } from './sourced';
 
 /** GJ in one MMBtu (International Table Btu, exact: NIST SP 811 B.8). */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { saturatedVapour, saturationTemperature } from '../index';
+import { saturationTemperature } from '../region4';
+import { saturatedVapour } from '../saturation';
 import { readHeader, SATURATION_TOLERANCE } from './header';
 
 describe('readHeader', () => {

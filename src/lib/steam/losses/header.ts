@@ -3,7 +3,9 @@
  * saturation temperature, whether the steam is superheated or at saturation (and so possibly
  * wet, which a thermometer cannot tell from dry), and the enthalpy the steam carries.
  */
-import { saturatedVapour, saturationTemperature, stateFromPT } from '../index';
+import { stateFromPT } from '../forward';
+import { saturationTemperature } from '../region4';
+import { saturatedVapour } from '../saturation';
 import type { Sourced } from './sourced';
 import { requireFinite, requirePositive } from './sourced';
 

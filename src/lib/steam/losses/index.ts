@@ -40,6 +40,23 @@ export {
 	SATURATION_TOLERANCE,
 	readHeader
 } from './header';
+export type {
+	CostBasis,
+	FindingInput,
+	Fuel,
+	Header,
+	HeaderFindingInput,
+	HeaderInputs,
+	InsulationFindingInput,
+	InsulationInputs,
+	InsulationLayerInput,
+	InsulationMaterialInput,
+	LeakFindingInput,
+	LeakInputs,
+	TrapFactors,
+	TrapFindingInput,
+	TrapInputs
+} from './inputs';
 export { type InsulationGap, insulationGap } from './insulation';
 export {
 	LEAK_SIZE_GUIDE,

@@ -3,16 +3,12 @@
  * surface, with the surface temperatures before and after and the burn-risk flags. Pipes and
  * fittings use the ../heat models (ASTM C680, C1129 approach); flat surfaces flat-insulation.ts.
  */
-import type { InsulationInputs } from '../../schemas/finding';
-import {
-	CONTACT_BURN_THRESHOLD,
-	FITTING_EQUIVALENT_LENGTH,
-	flatSurfaceHeatLoss,
-	insulationSaving,
-	surfaceSafety,
-	type SurfaceSafety
-} from '../heat/index';
+import { FITTING_EQUIVALENT_LENGTH } from '../heat/fittings';
+import { flatSurfaceHeatLoss } from '../heat/flat-surface';
+import { insulationSaving } from '../heat/insulation-saving';
+import { CONTACT_BURN_THRESHOLD, surfaceSafety, type SurfaceSafety } from '../heat/surface-safety';
 import { insulatedFlatSurfaceHeatLoss } from './flat-insulation';
+import type { InsulationInputs } from './inputs';
 import type { Assumption } from './sourced';
 
 export interface InsulationGap {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { LEAK_SIZE_CLASSES } from '../../schemas/finding';
+import { LEAK_SIZE_CLASSES } from '../vocabulary';
 import { LEAK_SIZE_GUIDE, leakDiameter, leakSteamLoss } from './leaks';
 import { orificeSteamFlow } from './orifice';
 import { DISCHARGE_COEFFICIENT } from './traps';

@@ -3,7 +3,8 @@
  * would pass the same steam) at the header's pressure, by the same orifice model as traps.
  * When the hole cannot be seen, the auditor picks a size class from what the plume looks like.
  */
-import type { LeakInputs, LeakSizeClass } from '../../schemas/finding';
+import type { LeakSizeClass } from '../vocabulary';
+import type { LeakInputs } from './inputs';
 import type { Assumption, Sourced } from './sourced';
 import { orificeSteamFlow, type OrificeFlow } from './orifice';
 import { DISCHARGE_COEFFICIENT } from './traps';

@@ -6,13 +6,10 @@
  * choked and the throat sits at the critical pressure. Two-phase throats use the homogeneous
  * equilibrium model (the mixture's density from IF97's dryness fraction).
  */
-import {
-	saturatedVapour,
-	saturationTemperature,
-	stateFromPS,
-	stateFromPT,
-	stateFromPX
-} from '../index';
+import { stateFromPT } from '../forward';
+import { stateFromPS } from '../inverse';
+import { saturationTemperature } from '../region4';
+import { saturatedVapour, stateFromPX } from '../saturation';
 import type { SteamState } from '../types';
 import { LB_KG, IN_M, PSI_PA } from '../../units/constants';
 import { peakOf, type Peak } from './peak-search';

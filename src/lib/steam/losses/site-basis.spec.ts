@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { CostBasis, Header } from '../../schemas/site';
-import { saturatedVapour, stateFromPT, stateFromTX } from '../index';
+import { stateFromPT } from '../forward';
+import { saturatedVapour, stateFromTX } from '../saturation';
+import type { CostBasis, Header } from './inputs';
 import { findHeader, headerSteam, resolveBasis, siteAtmosphere } from './site-basis';
 
 const costBasis: CostBasis = {

@@ -2,10 +2,12 @@
  * The site's cost basis resolved into the numbers the energy chain needs, each with its
  * source, and the site's headers resolved into steam states.
  */
-import type { CostBasis, Header } from '../../schemas/site';
 import { STANDARD_ATMOSPHERE_MPA } from '../../units/constants';
 import { atmosphericPressureAtElevation } from '../../units/atmosphere';
-import { saturatedVapour, saturationTemperature, stateFromPT, stateFromTX } from '../index';
+import { stateFromPT } from '../forward';
+import { saturationTemperature } from '../region4';
+import { saturatedVapour, stateFromTX } from '../saturation';
+import type { CostBasis, Header } from './inputs';
 import { requireEfficiency, requireHours } from './energy-chain';
 import { FUELS, emissionFactor, fuelPricePerGJ, parseDecimal } from './fuels';
 import type { Assumption, Sourced } from './sourced';

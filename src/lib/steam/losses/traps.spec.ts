@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { TrapInputs } from '../../schemas/finding';
+import type { TrapInputs } from './inputs';
 import { orificeSteamFlow } from './orifice';
 import { DISCHARGE_COEFFICIENT, TRAP_FACTORS, defaultTrapOrifice, trapSteamLoss } from './traps';
 

@@ -4,8 +4,8 @@
  * up. Every factor is returned as an assumption with its source, and the site may override
  * the two trap factors.
  */
-import type { TrapCondition, TrapInputs, TrapType } from '../../schemas/finding';
-import type { TrapFactors } from '../../schemas/site';
+import type { TrapCondition, TrapType } from '../vocabulary';
+import type { TrapFactors, TrapInputs } from './inputs';
 import type { Assumption, Sourced } from './sourced';
 import { orificeSteamFlow, type OrificeFlow } from './orifice';
 
