@@ -143,6 +143,19 @@ export const matrix: Record<string, Record<string, Case>> = {
 		}
 	},
 
+	// The Walk's data: any signed-in person may ask who they are; recording needs the role,
+	// and a survey of another firm (or not assigned to this auditor) does not exist for them.
+	'/api/me': { GET: { expect: signedIn(200, 401) } },
+	'/api/surveys': {
+		GET: { expect: { anonymous: 401, admin: 200, consultant: 200, auditor: 200, client: 403 } }
+	},
+	'/api/surveys/[id]/snapshot': {
+		GET: {
+			request: (t) => ({ path: `/api/surveys/${t.surveyId}/snapshot` }),
+			expect: { anonymous: 401, admin: mine, consultant: mine, auditor: mine, client: 403 }
+		}
+	},
+
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }
 	}

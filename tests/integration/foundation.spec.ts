@@ -57,7 +57,10 @@ describe('demo seed', () => {
 			'sites',
 			'headers',
 			'surveys',
-			'survey_auditors'
+			'survey_auditors',
+			'areas',
+			'assets',
+			'findings'
 		]) {
 			const [{ n }] = await rows<{ n: number }>(
 				sql`SELECT COUNT(*) AS n FROM ${sql.identifier(t)}`
@@ -72,6 +75,11 @@ describe('demo seed', () => {
 		await seedDemo(db);
 		expect(await counts()).toEqual(before);
 		expect(before.users).toBeGreaterThanOrEqual(demoUsers.length);
+		const versions = await rows<{ n: number }>(
+			sql`SELECT COUNT(*) AS n FROM assets WHERE version > 2`
+		);
+		// A second run maps every trap onto its asset again without changing its details.
+		expect(Number(versions[0].n)).toBe(0);
 	});
 
 	it('gives every role in both firms an argon2id password', async () => {

@@ -8,6 +8,13 @@ import { resolve } from 'node:path';
 export const appPort = Number(process.env.STEAMWISP_E2E_PORT ?? 4181);
 export const appOrigin = `http://127.0.0.1:${appPort}`;
 export const testDbName = process.env.STEAMWISP_DB_NAME ?? 'steamwisp_test';
+// The browser tests write people, sessions and surveys: never into the development database.
+if (testDbName === 'steamwisp') {
+	throw new Error(
+		'Browser tests will not run on "steamwisp": it is the development database, with your ' +
+			'demo data. Run them through `npm test`, or set STEAMWISP_DB_NAME=steamwisp_test.'
+	);
+}
 
 export const e2eMail = {
 	STEAMWISP_MAIL_PORT: process.env.STEAMWISP_E2E_MAIL_PORT ?? '2526',

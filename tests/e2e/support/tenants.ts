@@ -26,6 +26,8 @@ export interface Tenant {
 	users: DemoUser[];
 	clientId: string;
 	otherClientId: string;
+	/** The demo survey in the field (the tenant's auditor is assigned to it). */
+	surveyId: string;
 	targetUserId: string;
 	invitationId: string;
 	messageId: string;
@@ -131,6 +133,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		users,
 		clientId: client.id,
 		otherClientId: ids.otherClient,
+		surveyId: survey.id,
 		targetUserId: ids.target,
 		invitationId: ids.invitation,
 		messageId: message.id,

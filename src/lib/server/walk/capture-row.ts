@@ -1,0 +1,47 @@
+/**
+ * A stored finding row as the device's capture: the one way the server hands a finding back
+ * to a phone (snapshot now, sync pull later), so both say the same thing about it.
+ */
+import { findingCaptureSchema, type FindingCapture } from '../../schemas/capture';
+import type { FindingRow } from '../db/schema';
+
+/** The columns of `findings` a capture is read from (plus the asset's tag). */
+export type CaptureColumns = Pick<
+	FindingRow,
+	| 'id'
+	| 'surveyId'
+	| 'kind'
+	| 'headerId'
+	| 'areaId'
+	| 'location'
+	| 'notes'
+	| 'inputs'
+	| 'photoIds'
+	| 'recordedAt'
+	| 'createdAt'
+	| 'updatedAt'
+> & { assetTag: string | null };
+
+/**
+ * The capture of a stored finding, validated with the shared schema (a row that fails it is
+ * a server fault and throws). Recorded at is the device's time of recording when known; the
+ * last change is never before it, as the schema demands, even when a device clock ran ahead.
+ */
+export function captureFromRow(row: CaptureColumns): FindingCapture {
+	const createdAt = row.recordedAt ?? row.createdAt;
+	const updatedAt = row.updatedAt < createdAt ? createdAt : row.updatedAt;
+	return findingCaptureSchema.parse({
+		id: row.id,
+		surveyId: row.surveyId,
+		kind: row.kind,
+		inputs: row.inputs,
+		...(row.headerId ? { headerId: row.headerId } : {}),
+		...(row.areaId ? { areaId: row.areaId } : {}),
+		...(row.assetTag ? { assetTag: row.assetTag } : {}),
+		location: row.location ?? '',
+		notes: row.notes ?? '',
+		photoIds: row.photoIds ?? [],
+		createdAt: createdAt.toISOString(),
+		updatedAt: updatedAt.toISOString()
+	});
+}

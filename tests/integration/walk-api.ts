@@ -1,0 +1,37 @@
+/** Calling the Walk's API route handlers directly, as SvelteKit would after its hooks. */
+import { isHttpError } from '@sveltejs/kit';
+import { GET as me } from '../../src/routes/api/me/+server';
+import { GET as surveys } from '../../src/routes/api/surveys/+server';
+import { GET as snapshot } from '../../src/routes/api/surveys/[id]/snapshot/+server';
+
+type Handler = (event: never) => Response | Promise<Response>;
+
+async function call(
+	handler: Handler,
+	routeId: string,
+	user: SessionUser | null,
+	path: string,
+	params: Record<string, string> = {}
+): Promise<{ status: number; body: unknown; headers: Headers }> {
+	const url = new URL(`http://127.0.0.1${path}`);
+	const event = {
+		locals: { user, session: null },
+		params,
+		url,
+		request: new Request(url),
+		route: { id: routeId }
+	};
+	try {
+		const res = await handler(event as never);
+		return { status: res.status, body: await res.json(), headers: res.headers };
+	} catch (e) {
+		if (isHttpError(e)) return { status: e.status, body: e.body, headers: new Headers() };
+		throw e;
+	}
+}
+
+export const getMe = (user: SessionUser | null) => call(me, '/api/me', user, '/api/me');
+export const getSurveys = (user: SessionUser | null) =>
+	call(surveys, '/api/surveys', user, '/api/surveys');
+export const getSnapshot = (user: SessionUser | null, id: string) =>
+	call(snapshot, '/api/surveys/[id]/snapshot', user, `/api/surveys/${id}/snapshot`, { id });
