@@ -17,8 +17,11 @@ export function areaNames(areas: readonly Area[]): ReadonlyMap<string, string> {
 	return new Map(areas.map((a) => [a.id, a.name]));
 }
 
-/** Lower case without accents, so "kuhler" finds "Kühler". */
+const ASCII = /^[\x20-\x7e]*$/;
+
+/** Lower case without accents, so "kuhler" finds "Kühler" (plain ASCII skips the slow path). */
 function fold(text: string): string {
+	if (ASCII.test(text)) return text.toLowerCase();
 	return text.normalize('NFD').replace(/\p{M}/gu, '').toLowerCase();
 }
 
