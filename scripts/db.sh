@@ -52,14 +52,28 @@ start() {
 }
 
 create_database() {
-	local name="$1"
-	sql "CREATE DATABASE IF NOT EXISTS \`$name\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
-		CREATE USER IF NOT EXISTS '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
-		CREATE USER IF NOT EXISTS '$DB_USER'@'localhost' IDENTIFIED BY '$DB_PASSWORD';
-		ALTER USER '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
-		ALTER USER '$DB_USER'@'localhost' IDENTIFIED BY '$DB_PASSWORD';
-		GRANT ALL PRIVILEGES ON \`$name\`.* TO '$DB_USER'@'127.0.0.1';
-		GRANT ALL PRIVILEGES ON \`$name\`.* TO '$DB_USER'@'localhost';"
+	local name user password
+	sql_name "$1" >/dev/null && sql_name "$DB_USER" >/dev/null
+	name="$(sql_name "$1")"
+	user="$(sql_string "$DB_USER")"
+	password="$(sql_string "$DB_PASSWORD")"
+	sql "CREATE DATABASE IF NOT EXISTS $name CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+		CREATE USER IF NOT EXISTS $user@'127.0.0.1' IDENTIFIED BY $password;
+		CREATE USER IF NOT EXISTS $user@'localhost' IDENTIFIED BY $password;
+		ALTER USER $user@'127.0.0.1' IDENTIFIED BY $password;
+		ALTER USER $user@'localhost' IDENTIFIED BY $password;
+		GRANT ALL PRIVILEGES ON $name.* TO $user@'127.0.0.1';
+		GRANT ALL PRIVILEGES ON $name.* TO $user@'localhost';"
+}
+
+# refuse_development NAME — `fresh` drops NAME: never the database npm start uses (steamwisp,
+# or STEAMWISP_DB_NAME when it names another one than the test database).
+refuse_development() {
+	local test_db="${STEAMWISP_TEST_DB_NAME:-steamwisp_test}"
+	if [ "$1" = steamwisp ] || { [ "$1" = "$DB_NAME" ] && [ "$1" != "$test_db" ]; }; then
+		die "scripts/db.sh fresh will not drop '$1': it is the development database (npm start's),
+    with your demo data and your own changes. Name another database, e.g. scripts/db.sh fresh steamwisp_test"
+	fi
 }
 
 stop() {
@@ -84,10 +98,12 @@ up)
 	;;
 fresh)
 	[ -n "${2:-}" ] || die "usage: scripts/db.sh fresh DATABASE"
+	sql_name "$2" >/dev/null
+	refuse_development "$2"
 	ensure_installed
 	initialise
 	start
-	sql "DROP DATABASE IF EXISTS \`$2\`;"
+	sql "DROP DATABASE IF EXISTS $(sql_name "$2");"
 	create_database "$2"
 	;;
 stop) stop ;;

@@ -30,6 +30,37 @@ die() {
 
 is_root() { [ "$(id -u)" = 0 ]; }
 
+# require_node — Steamwisp needs Node.js 20.19 or newer (package.json "engines"); Debian 12's
+# own nodejs package is 18, which fails later with errors that do not say why.
+require_node() {
+	local version
+	if ! version="$(node -p 'process.versions.node' 2>/dev/null)"; then
+		die "Node.js is missing. Steamwisp needs Node.js 20.19 or newer (20 LTS or 22 LTS): install it
+    from https://nodejs.org or your distribution's packages (Debian 12's own nodejs is 18, too old), then run this again."
+	fi
+	local major minor
+	IFS=. read -r major minor _ <<<"$version"
+	if [ "$major" -lt 20 ] || { [ "$major" -eq 20 ] && [ "$minor" -lt 19 ]; }; then
+		die "this machine has Node.js $version, but Steamwisp needs 20.19 or newer (20 LTS or 22 LTS).
+    Install a newer Node.js from https://nodejs.org or your distribution's packages (Debian 12's own
+    nodejs is 18, too old), make sure 'node --version' shows it, then run this again."
+	fi
+}
+
+# sql_name NAME — NAME as a backtick-quoted SQL identifier; refuses anything outside [A-Za-z0-9_].
+sql_name() {
+	[[ "$1" =~ ^[A-Za-z0-9_]{1,64}$ ]] ||
+		die "'$1' is not a database or user name Steamwisp accepts: use 1 to 64 letters, digits or _"
+	printf '`%s`' "$1"
+}
+
+# sql_string TEXT — TEXT as a single-quoted SQL string (backslashes and quotes escaped).
+sql_string() {
+	local s="${1//\\/\\\\}"
+	s="${s//\'/\\\'}"
+	printf "'%s'" "$s"
+}
+
 # apt_install "why" pkg... — installs Debian packages as root, or tells a non-root user the exact command.
 apt_install() {
 	local why="$1"

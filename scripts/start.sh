@@ -4,12 +4,12 @@
 # Ctrl-C stops the app; `npm run db:stop` stops the database.
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
+require_node
 
 # A second `npm start` (or anything else) on the port: say so instead of a stack trace.
 if (exec 3<>"/dev/tcp/$APP_HOST/$APP_PORT") 2>/dev/null; then
 	die "port $APP_PORT on $APP_HOST is already in use (is Steamwisp already running?). Stop it, or run: PORT=4280 npm start"
 fi
-
 
 ensure_node_modules
 bash scripts/db.sh up

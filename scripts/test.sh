@@ -5,6 +5,7 @@
 # and Playwright against the built app in Debian's Chromium. Runs every stage even after a
 # failure; exits non-zero if anything failed; the last line reads "N passed, N failed".
 source "$(dirname "$0")/lib.sh"
+require_node
 set +e
 cd "$ROOT"
 

@@ -1,7 +1,8 @@
 /**
  * Reference states from Debian's python3-iapws, for checks of the steam engine.
- * Installs the package when missing (as root), and regenerates the cached points when they
- * are missing, older than their generator script, or from another version of the library.
+ * Never installs anything (npm test installs the package before the tests run); regenerates the
+ * cached points when they are missing, older than their generator script, or from another
+ * version of the library.
  */
 import { execFileSync } from 'node:child_process';
 import { existsSync, readFileSync, statSync } from 'node:fs';
@@ -10,7 +11,6 @@ import { fileURLToPath } from 'node:url';
 export const PYTHON = '/usr/bin/python3';
 const SCRIPT = fileURLToPath(new URL('./iapws_points.py', import.meta.url));
 const CACHE = fileURLToPath(new URL('./.cache/iapws-points.json', import.meta.url));
-const APT_INSTALL = ['apt-get', 'install', '-y', 'python3-iapws'];
 
 export type Kind = 'pt' | 'psat' | 'tsat' | 'satliq' | 'satvap' | 'px' | 'tx' | 'ph' | 'ps';
 
@@ -55,17 +55,13 @@ function succeeds(command: string, args: string[]): boolean {
 	}
 }
 
-/** The installed Debian version of python3-iapws; installs it first when root and missing. */
+/** The installed Debian version of python3-iapws; a plain error saying how to get it when missing. */
 export function ensureIapws(): string {
 	if (!succeeds(PYTHON, ['-c', 'import iapws'])) {
-		if (process.getuid?.() !== 0) {
-			throw new Error(`python3-iapws is missing: run \`sudo ${APT_INSTALL.join(' ')}\``);
-		}
-		// A fresh machine may have empty package lists: update once, then try again.
-		if (!succeeds(APT_INSTALL[0], APT_INSTALL.slice(1))) {
-			execFileSync('apt-get', ['update'], { stdio: 'inherit' });
-			execFileSync(APT_INSTALL[0], APT_INSTALL.slice(1), { stdio: 'inherit' });
-		}
+		throw new Error(
+			'The reference steam library python3-iapws is not installed. `npm test` installs it; ' +
+				'to run these tests on their own, install it first: sudo apt-get install python3-iapws'
+		);
 	}
 	const args = ['-W', '-f=${Version}', 'python3-iapws'];
 	return `Debian python3-iapws ${execFileSync('dpkg-query', args, { encoding: 'utf8' }).trim()}`;
