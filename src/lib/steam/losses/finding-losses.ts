@@ -5,6 +5,7 @@
 import { saturationTemperature } from '../region4';
 import { saturatedLiquid } from '../saturation';
 import { condensateHeatRate, steamHeatRate } from './energy-chain';
+import { coldInletNote, surfaceStateNote } from './field-readings';
 import { type HeaderReading, readHeader, SATURATION_TOLERANCE } from './header';
 import type {
 	CostBasis,
@@ -89,6 +90,11 @@ export function trapLoss(
 	const returned = toDrain ? 0 : basis.condensateReturnFraction;
 	const notes = [loss.note].filter((n): n is string => n !== null);
 	const assumptions = [...headerAssumptions(header, steam.enthalpy), ...loss.assumptions];
+	const cold = coldInletNote(inputs, steam.saturationTemperature);
+	if (cold !== null) {
+		notes.push(cold.note);
+		assumptions.push(cold.assumption);
+	}
 	if (condensateFlow > 0) {
 		notes.push('Condensate discharged to drain is lost as water and as heat above feedwater.');
 		assumptions.push({
@@ -175,6 +181,11 @@ export function insulationLoss(
 	const notes = [
 		`Insulating saves ${(gap.saving / 1000).toFixed(2)} kW of ${(gap.bare / 1000).toFixed(2)} kW lost bare; priced as heat ÷ boiler efficiency.`
 	];
+	const state = surfaceStateNote(inputs.surfaceState, gap.bare);
+	if (state !== null) {
+		notes.push(state.note);
+		assumptions.push(state.assumption);
+	}
 	if (gap.after.burnRisk) {
 		notes.push(
 			'The proposed insulation still leaves the surface above the burn-risk threshold: add thickness.'

@@ -25,6 +25,12 @@ export {
 } from './flat-insulation';
 export { type FlashInput, type FlashResult, flashSteamFraction } from './flash';
 export {
+	COLD_INLET_MARGIN,
+	type ReadingNote,
+	coldInletNote,
+	surfaceStateNote
+} from './field-readings';
+export {
 	ENERGY_UNIT_GJ,
 	FUELS,
 	MMBTU_GJ,
