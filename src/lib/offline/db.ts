@@ -10,7 +10,8 @@ import { upgradeToV2 } from './upgrade-v2';
  * here first, so nothing is lost on reload or without signal; the outbox then carries each
  * change to the server. Keys are UUIDs made on the device. Keep every version() block:
  * phones in the field upgrade from whatever version they hold. One database per signed-in
- * person (deviceDbName), so a shared phone keeps auditors apart.
+ * person (deviceDbName), so a shared phone keeps auditors apart; the shared version-1 name
+ * 'steamwisp' is no longer opened by the app, but the constructor still opens any name.
  */
 
 /** A survey taken offline: its summary plus where its snapshot was taken. */
@@ -184,13 +185,3 @@ export function closeDeviceDb(userId: string): void {
 	open.get(name)?.close();
 	open.delete(name);
 }
-
-/**
- * The shared database of version 1, before there was one per person.
- * @deprecated Use openDeviceDb(userId); kept while the Walk's first page still reads it.
- */
-export function deviceDb(): DeviceDatabase {
-	legacy ??= new DeviceDatabase('steamwisp');
-	return legacy;
-}
-let legacy: DeviceDatabase | undefined;

@@ -26,6 +26,7 @@ function fold(text: string): string {
 }
 
 interface Searchable {
+	capture: DeviceFinding['capture'];
 	areaName: string;
 	tag: string;
 	text: string;
@@ -33,16 +34,22 @@ interface Searchable {
 
 // One folded search string per finding object, made the first time it is searched: a
 // keystroke is then one pass of substring tests. A changed finding is a new object (Dexie
-// reads make new ones), so the cache never serves stale text.
+// reads make new ones; a new capture object is noticed too), so the cache serves no stale
+// text as long as findings are replaced rather than edited in place.
 const searchCache = new WeakMap<DeviceFinding, Searchable>();
 
 function searchable(finding: DeviceFinding, names: ReadonlyMap<string, string>): Searchable {
 	const c = finding.capture;
 	const areaName = c.areaId === undefined ? '' : (names.get(c.areaId) ?? '');
 	let s = searchCache.get(finding);
-	if (s === undefined || s.areaName !== areaName) {
+	if (s === undefined || s.capture !== c || s.areaName !== areaName) {
 		const tag = fold(c.assetTag ?? '');
-		s = { areaName, tag, text: [fold(c.location), fold(c.notes), tag, fold(areaName)].join('\n') };
+		s = {
+			capture: c,
+			areaName,
+			tag,
+			text: [fold(c.location), fold(c.notes), tag, fold(areaName)].join('\n')
+		};
 		searchCache.set(finding, s);
 	}
 	return s;
