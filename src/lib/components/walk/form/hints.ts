@@ -3,7 +3,7 @@
  * takes by default, and a cold inlet that points to a blocked trap.
  */
 import type { SiteHeader } from '$lib/schemas/snapshot';
-import { defaultTrapOrifice, saturationTemperature } from '$lib/steam';
+import { COLD_INLET_MARGIN, defaultTrapOrifice, saturationTemperature } from '$lib/steam';
 import type { TrapType } from '$lib/schemas/finding-vocabulary';
 import { parseNumber } from './parse-number';
 import { readable, toBaseValue } from './quantity';
@@ -40,13 +40,9 @@ export function orificeDefaultText(values: FormValues, ctx: FormContext): string
 }
 
 /**
- * How far below saturation an inlet reading must be to suggest backed-up condensate:
- * 20 K (36 °F), common practice for surface thermometers on trap inlets, which read a few
- * kelvin low even on live steam.
+ * A hint when the inlet reads more than the engine's COLD_INLET_MARGIN (common practice)
+ * below the header's saturation temperature, else null: the same rule as the result's note.
  */
-export const COLD_INLET_MARGIN = 20;
-
-/** A hint when the inlet reads well below the header's saturation temperature, else null. */
 export function coldInletHint(values: FormValues, ctx: FormContext): string | null {
 	const header = ctx.headers.find((h) => h.id === values.headerId);
 	const typed = parseNumber(values.inletTemperature ?? '');
@@ -58,6 +54,6 @@ export function coldInletHint(values: FormValues, ctx: FormContext): string | nu
 		return null;
 	}
 	const saturation = saturationTemperature(header.pressure);
-	if (inlet >= saturation - COLD_INLET_MARGIN) return null;
+	if (inlet >= saturation - COLD_INLET_MARGIN.value) return null;
 	return `The inlet reads ${readable('temperature', inlet, ctx)}, well below the ${readable('temperature', saturation, ctx)} of steam at this header: condensate is backing up — the trap may be blocked or failed closed.`;
 }

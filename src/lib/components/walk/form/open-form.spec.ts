@@ -104,3 +104,16 @@ describe('openForm', () => {
 		});
 	});
 });
+
+describe('cold inlet hint', () => {
+	it('shows when the inlet reads well below saturation at the header', async () => {
+		const { coldInletHint } = await import('./hints');
+		const ctx = formContext('SI');
+		// 10 bar g at 0.095 MPa: saturation 184 °C (IAPWS-IF97 region 4)
+		expect(coldInletHint({ headerId: HEADER_ID, inletTemperature: '120' }, ctx)).toMatch(
+			/^The inlet reads 120 °C, well below the 184 °C of steam at this header/
+		);
+		expect(coldInletHint({ headerId: HEADER_ID, inletTemperature: '180' }, ctx)).toBeNull();
+		expect(coldInletHint({ headerId: HEADER_ID, inletTemperature: '' }, ctx)).toBeNull();
+	});
+});
