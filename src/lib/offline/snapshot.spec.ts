@@ -70,6 +70,20 @@ describe('storeSnapshot', () => {
 		expect((await db.surveys.get(SURVEY_ID))?.name).toBe('Spring walk 2025');
 	});
 
+	it('keeps its previous copy whole when the new one cannot be stored (two traps, one tag)', async () => {
+		db = testDb();
+		await storeSnapshot(db, snapshot());
+		const [trap] = snapshot().assets;
+		const twin = { ...trap, id: '5e1f0000-0000-4000-8000-0000000000a3' };
+		const renamed = { ...snapshot().survey, name: 'Renamed' };
+		await expect(
+			storeSnapshot(db, snapshot([], { assets: [trap, twin], survey: renamed }))
+		).rejects.toThrow('This device could not store the survey, so it keeps the copy it had');
+		expect((await db.surveys.get(SURVEY_ID))?.name).toBe('Spring walk 2025');
+		expect(await db.assets.count()).toBe(1);
+		expect(await db.areas.count()).toBe(2);
+	});
+
 	it('never overwrites a pending local edit, and replaces what is not pending', async () => {
 		db = testDb();
 		const mine = leakCapture({ location: 'server wording' });

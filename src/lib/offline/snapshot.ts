@@ -61,7 +61,7 @@ export async function storeSnapshot(db: DeviceDatabase, raw: unknown): Promise<S
 	};
 	let keptLocal = 0;
 
-	await db.transaction(
+	const write = db.transaction(
 		'rw',
 		[db.surveys, db.sites, db.areas, db.assets, db.findings, db.photos],
 		async () => {
@@ -118,6 +118,15 @@ export async function storeSnapshot(db: DeviceDatabase, raw: unknown): Promise<S
 			}
 		}
 	);
+	try {
+		await write;
+	} catch (error) {
+		// The transaction rolled back: the device still holds its previous copy.
+		throw new Error(
+			`This device could not store the survey, so it keeps the copy it had (${(error as Error).message})`,
+			{ cause: error }
+		);
+	}
 	return { surveyId, findings: snap.findings.length, keptLocal, assets: snap.assets.length };
 }
 
