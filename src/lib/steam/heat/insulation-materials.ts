@@ -63,7 +63,7 @@ export const MATERIALS: Readonly<Record<NamedMaterial, MaterialData>> = {
 			[600, 0.55]
 		],
 		'ASTM C547 Type II: maximum use 1200 °F (650 °C), §4.1; maximum apparent thermal ' +
-			'conductivity from Table 1 (conductivity values from memory, to be confirmed against the current edition)'
+			'conductivity by mean temperature as in its Table 1 (common practice values, not yet checked against the current edition)'
 	),
 	'calcium-silicate': fromSpecification(
 		'Calcium silicate pipe insulation, ASTM C533 Type I',
@@ -78,7 +78,7 @@ export const MATERIALS: Readonly<Record<NamedMaterial, MaterialData>> = {
 			[700, 0.64]
 		],
 		'ASTM C533 Type I: maximum use 1200 °F (649 °C), §4.1; maximum apparent thermal ' +
-			'conductivity 0.41 Btu·in/(h·ft²·°F) at 100 °F mean; values at 200–700 °F from memory'
+			'conductivity 0.41 Btu·in/(h·ft²·°F) at 100 °F mean; values at 200–700 °F common practice, not yet checked against the current edition'
 	),
 	'cellular-glass': fromSpecification(
 		'Cellular glass pipe insulation, ASTM C552 Grade 6 Type II',

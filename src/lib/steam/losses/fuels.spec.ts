@@ -21,12 +21,12 @@ describe('energy units', () => {
 });
 
 describe('default emission factors', () => {
-	// Published values, kg CO2/MMBtu (SOURCES.md), converted per GJ with 1.055056 GJ/MMBtu.
+	// Published values, kg CO2/MMBtu (docs/sources.md), converted per GJ with 1.055056 GJ/MMBtu.
 	const published: [keyof typeof FUELS, number, string][] = [
 		['natural-gas', 53.06, 'EPA GHG Emission Factors Hub 2024, Table 1'],
 		['fuel-oil-2', 73.96, '40 CFR 98 Table C-1'],
 		['fuel-oil-6', 75.1, '40 CFR 98 Table C-1'],
-		['lpg', 61.46, 'EPA GHG Emission Factors Hub 2024, Table 1, propane'],
+		['lpg', 62.87, '40 CFR 98 Table C-1 (81 FR 89188, 2016), propane'],
 		['coal', 93.28, 'EPA GHG Emission Factors Hub 2024, Table 1, bituminous'],
 		['biomass', 93.8, 'EPA GHG Emission Factors Hub 2024, Table 1, wood']
 	];
@@ -89,7 +89,7 @@ describe('energy per priced unit', () => {
 
 describe('fuel price per GJ', () => {
 	it('converts a price per MMBtu and per therm', () => {
-		// $6.23/MMBtu is the gas price of the Manczyk worked example (SOURCES.md).
+		// $6.23/MMBtu is the gas price of the Manczyk worked example (docs/sources.md).
 		expect(fuelPricePerGJ({ kind: 'natural-gas', price: '6.23', unit: 'MMBtu' }).value).toBeCloseTo(
 			6.23 / 1.055056,
 			5

@@ -23,7 +23,7 @@ export const ENERGY_UNIT_GJ: Record<EnergyPriceUnit, number> = {
 };
 
 const EPA_HUB = 'US EPA GHG Emission Factors Hub (2024), Table 1';
-const CFR_C1 = '40 CFR Part 98 Subpart C, Table C-1';
+const CFR_C1 = '40 CFR Part 98 Subpart C, Table C-1 (as amended, 81 FR 89188, 2016)';
 
 /** Standard cubic foot (60 °F, 1 atm) in m³. */
 const SCF_M3 = FT_M ** 3;
@@ -82,8 +82,10 @@ export const FUELS: Record<FuelKind, FuelData> = {
 	},
 	lpg: {
 		label: 'LPG (propane)',
-		emissionFactor: perMmbtu(61.46, `${EPA_HUB}, propane`),
-		energyContent: perGallon(0.091, `${CFR_C1}, propane: 0.091 MMBtu/gal (from memory)`)
+		// Liquid propane's row, so the factor and the heat per gallon are on one basis (the
+		// table's "propane gas", 61.46 per scf, is for gas metered as gas).
+		emissionFactor: perMmbtu(62.87, `${CFR_C1}, propane`),
+		energyContent: perGallon(0.091, `${CFR_C1}, propane: 0.091 MMBtu/gal`)
 	},
 	coal: {
 		label: 'Coal (bituminous)',

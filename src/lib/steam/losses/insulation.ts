@@ -44,7 +44,7 @@ export function insulationGap(inputs: InsulationInputs, processTemperature: numb
 			label: 'Contact burn threshold',
 			value: CONTACT_BURN_THRESHOLD,
 			unit: 'K',
-			source: 'ASTM C1055 (from memory; common practice for personnel protection)'
+			source: 'common practice for personnel protection (the ASTM C1055 approach)'
 		}
 	];
 	if (inputs.item === 'surface') return flatGap(inputs, processTemperature, assumptions);

@@ -5,7 +5,10 @@
 export interface Sourced {
 	value: number;
 	unit: string;
-	/** A named publication, "common practice" or "from memory" (see /work/shared/SOURCES.md). */
+	/**
+	 * A named publication (docs/sources.md lists them), "common practice" for a fact of the trade,
+	 * or the site or finding it was entered on. Never "from memory": people read these.
+	 */
 	source: string;
 }
 
