@@ -11,5 +11,6 @@ if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
 	mail_pid=$!
 	trap 'kill "$mail_pid" 2>/dev/null || true' EXIT
 fi
-# Started directly (not through npx) so Ctrl-C stops the server itself (STACK.md gotcha 4).
+# Started directly (not through npx) so Ctrl-C stops the server itself: through npx, vite's
+# node child keeps running when its parent is killed.
 node_modules/.bin/vite dev --host "$APP_HOST" --port "${PORT:-5173}"

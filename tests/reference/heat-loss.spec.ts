@@ -27,7 +27,7 @@ const T_SAT_15_PSIG = 394.10466649483044;
 const T_SAT_150_PSIG = 458.63459567720577;
 
 describe('natural convection: Çengel & Ghajar Example 9-2, "Heat Loss from Hot Water Pipes"', () => {
-	// (pub, SOURCES.md) D = 0.08 m, L = 6 m, Ts = 70 °C, T∞ = 20 °C; air at 45 °C: k = 0.02699,
+	// (pub, docs/sources.md) D = 0.08 m, L = 6 m, Ts = 70 °C, T∞ = 20 °C; air at 45 °C: k = 0.02699,
 	// ν = 1.750e-5, Pr = 0.7241, β = 1/318 → Ra = 1.867e6, Nu = 17.40, h = 5.869, A = 1.508 m²,
 	// Q = 443 W (convection only).
 	const k = 0.02699;
@@ -261,7 +261,7 @@ describe('insulated pipe: independent hand calculation with constant conductivit
 	});
 });
 
-describe('insulation cuts losses by about 90% (US DOE steam fact sheet, pub, SOURCES.md)', () => {
+describe('insulation cuts losses by about 90% (US DOE steam fact sheet, pub, docs/sources.md)', () => {
 	// "Insulation can typically reduce energy losses by 90%": NPS 1 to 8 at 150 psig with the
 	// 1½ to 2 inch of mineral wool usual on such lines (common practice). "About 90%" is taken
 	// as 85–97%: thinner lagging on small lines saves less, thicker more.

@@ -3,7 +3,7 @@
  *  - IAPWS R7-97(2012), Revised Release on the IAPWS Industrial Formulation 1997 for the
  *    Thermodynamic Properties of Water and Steam, table 33: the computer-program verification
  *    values of the region 3 equation (eq. 28). Each value must round to its nine published digits.
- *    (pub) = also listed in /work/shared/SOURCES.md.
+ *    (pub) = read from the release (docs/sources.md).
  *  - Debian's python3-iapws 1.5.2 (IAPWS97 class, which iterates on the same eq. 28): region 3
  *    states from (p, T) and saturated states, within 1e-6 relative. (lib) = computed with it.
  * The supplementary backward equations for region 3 are not implemented (region 3 iterates on

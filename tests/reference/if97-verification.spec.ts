@@ -3,8 +3,8 @@
  * Industrial Formulation 1997 for the Thermodynamic Properties of Water and Steam, for regions
  * 1, 2, 4 and 5, the B23 and 2b/2c boundary equations and the backward equations of regions 1
  * and 2. Each value must round to the nine published digits (half a unit in the last digit,
- * relative 5e-9 or tighter). Table numbers are the release's. Values marked (pub) are also
- * listed in the team's SOURCES.md (../shared/SOURCES.md); values marked "from memory" are
+ * relative 5e-9 or tighter). Table numbers are the release's. Values marked (pub) were read
+ * from the release (docs/sources.md lists it); values marked "from memory" are
  * recalled from the release and not confirmed against a copy of it. Region 3 (table 33) is
  * checked beside region 3's own code.
  */

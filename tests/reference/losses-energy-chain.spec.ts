@@ -22,7 +22,7 @@ const fahrenheit = (f: number) => ((f - 32) * 5) / 9 + 273.15;
 
 describe('DOE "Benchmark the Fuel Cost of Steam Generation", Table 1', () => {
 	// (pub) Energy to raise 1 lb of saturated steam from feedwater, Btu/lb, feedwater 50, 100,
-	// 150, 200 and 250 °F, as quoted in SOURCES.md.
+	// 150, 200 and 250 °F, as listed in docs/sources.md.
 	const table: [number, number[]][] = [
 		[150, [1178, 1128, 1078, 1028, 977]],
 		[450, [1187, 1137, 1087, 1037, 986]],

@@ -11,7 +11,7 @@ const psig = (p: number) => (p + 14.696) * PSI_MPA;
 describe('flash steam fraction', () => {
 	// (lib) python3-iapws: x = (h'(p_high) − h'(p_low)) / (h''(p_low) − h'(p_low)).
 	const cases: [number, number, number][] = [
-		[100, 0, 0.132915], // SOURCES.md: 100 psig → 0 psig ≈ 13.29 %
+		[100, 0, 0.132915], // (lib) python3-iapws: 100 psig → 0 psig ≈ 13.29 %
 		[150, 15, 0.127136],
 		[15, 0, 0.039376],
 		[250, 50, 0.125351]

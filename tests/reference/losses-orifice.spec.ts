@@ -47,7 +47,7 @@ describe("orifice flow vs Napier's formula, 1 to 40 bar(g) dry saturated", () =>
 	 * upstream pressure alone. For a real vapour G* ∝ p1/√(Z·R·T1): along the saturation line
 	 * T1 rises from 393 K to 525 K over this range while Z falls, so the IF97 flux per unit
 	 * pressure falls steadily by about 7 % and crosses Napier's constant near 5 bar(g).
-	 * Measured here: +3.7 % at 1 bar(g) to −2.9 % at 40 bar(g). Tolerance 4 % (SOURCES.md:
+	 * Measured here: +3.7 % at 1 bar(g) to −2.9 % at 40 bar(g). Tolerance 4 % (docs/sources.md:
 	 * "within about 3 % between 30 and 600 psia"; 1 bar(g) is just below 30 psia).
 	 */
 	const gauges = [1, 2, 3, 5, 7, 10, 15, 20, 25, 30, 35, 40];

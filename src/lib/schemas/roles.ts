@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** Who a person is in a firm (DESIGN.md "People and surfaces"). */
+/** Who a person is in a firm: it decides which surfaces (Walk, Desk, Ladder) they reach. */
 export const roles = ['admin', 'consultant', 'auditor', 'client'] as const;
 export type Role = (typeof roles)[number];
 export const roleSchema = z.enum(roles, {

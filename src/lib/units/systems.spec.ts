@@ -20,7 +20,7 @@ describe('unit systems', () => {
 		}
 	});
 
-	// The display units DESIGN.md names for each system.
+	// The display units each system shows (docs/walk.md: bar g, °C, mm / psig, °F, in).
 	it('SI shows bar g, °C, kg/h, kW, GJ, kJ/kg, mm, m, m³ and kg', () => {
 		const labels = QUANTITIES.map((q) => unitLabel(displayUnit(q, 'SI')));
 		for (const label of ['bar g', '°C', 'kg/h', 'kW', 'GJ', 'kJ/kg', 'mm', 'm', 'm³', 'kg']) {

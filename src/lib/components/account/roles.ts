@@ -1,6 +1,6 @@
 import type { Role } from '$lib/schemas/roles';
 
-/** How roles read in sentences and lists (DESIGN.md "People and surfaces"). */
+/** How roles read in sentences and lists. */
 export const roleNames: Record<Role, { name: string; article: string; does: string }> = {
 	admin: {
 		name: 'firm admin',

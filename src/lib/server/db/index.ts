@@ -6,7 +6,7 @@ import { connectionUri } from './url';
 
 /**
  * One connection pool per app process. Relational queries need `mode: 'planetscale'`
- * because MariaDB has no LEFT JOIN LATERAL (STACK.md).
+ * because MariaDB has no LEFT JOIN LATERAL (DEVELOPERS.md, "The database").
  */
 export const pool = mysql.createPool({
 	uri: connectionUri(env),

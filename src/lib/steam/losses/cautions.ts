@@ -1,6 +1,6 @@
 /**
  * Safety cautions carried with every result that involves live steam, pressure or hot
- * surfaces (DESIGN.md "Safety"). Wording is ours; the substance is the trade's usual care.
+ * surfaces (DEVELOPERS.md, "Safety"). Wording is ours; the substance is the trade's usual care.
  */
 import type { FindingKind, TrapCondition } from '../vocabulary';
 

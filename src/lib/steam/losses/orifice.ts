@@ -168,7 +168,7 @@ export function orificeSteamFlow({ p1, p2, diameter, cd, T1, x1 }: OrificeInput)
 
 /**
  * Napier's formula for choked flow of saturated steam, W [lb/s] = A [in²] · P [psia] / 70,
- * times a discharge coefficient (SOURCES.md: as recommended by ASME PTC 25.3-1976).
+ * times a discharge coefficient (docs/sources.md: as recommended by ASME PTC 25.3-1976).
  * @param p1 upstream pressure, MPa absolute; diameter m; cd (0, 1]
  * @returns mass flow, kg/s
  */
