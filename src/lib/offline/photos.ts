@@ -11,7 +11,7 @@ import type { DeviceDatabase, DevicePhoto } from './db';
 /** Long side of a stored photo and of its thumbnail, px. */
 export const PHOTO_MAX_SIDE = 1920;
 export const THUMBNAIL_MAX_SIDE = 320;
-/** Size ceilings, MB (the library's unit, 2^20 bytes). */
+/** Size targets in the library's MB (2^20 bytes): 0.4 is 400 KiB for a photo, 40 KiB for a thumbnail. */
 export const PHOTO_MAX_MB = 0.4;
 export const THUMBNAIL_MAX_MB = 0.04;
 
@@ -25,7 +25,7 @@ export interface PreparedPhoto {
 }
 
 /**
- * Compresses a camera photo to a JPEG of at most 1920 px and 400 kB, upright, with its EXIF
+ * Compresses a camera photo to a JPEG of at most 1920 px and 400 KiB, upright, with its EXIF
  * (and so any location) left out, plus a 320 px thumbnail. The work runs in a Web Worker
  * whose script is the library's own file served by this app: without `libURL` the library
  * fetches it from a public CDN, and offline it would quietly fall back to the main thread.
