@@ -70,9 +70,13 @@ create_database() {
 # or STEAMWISP_DB_NAME when it names another one than the test database).
 refuse_development() {
 	local test_db="${STEAMWISP_TEST_DB_NAME:-steamwisp_test}"
-	if [ "$1" = steamwisp ] || { [ "$1" = "$DB_NAME" ] && [ "$1" != "$test_db" ]; }; then
-		die "scripts/db.sh fresh will not drop '$1': it is the development database (npm start's),
+	if [ "$1" = steamwisp ]; then
+		die "scripts/db.sh fresh will not drop 'steamwisp': it is the development database (npm start's),
     with your demo data and your own changes. Name another database, e.g. scripts/db.sh fresh steamwisp_test"
+	fi
+	if [ "$1" = "$DB_NAME" ] && [ "$1" != "$test_db" ]; then
+		die "scripts/db.sh fresh will not drop '$1': STEAMWISP_DB_NAME names it, so npm start would use it
+    as the development database. If it is a scratch database, run: env -u STEAMWISP_DB_NAME bash scripts/db.sh fresh $1"
 	fi
 }
 

@@ -13,7 +13,7 @@ import {
 import { pool as appPool } from '../../src/lib/server/db';
 import * as schema from '../../src/lib/server/db/schema';
 import { demoSites, demoSurveys, demoUsers } from '../../src/lib/server/seed/demo';
-import { publishedSurveyId } from '../../src/lib/server/seed/findings';
+import { captureOf, demoFindings, publishedSurveyId } from '../../src/lib/server/seed/findings';
 import { testDatabase } from './db';
 import { getMe, getSnapshot, getSurveys } from './walk-api';
 
@@ -107,6 +107,22 @@ describe('GET /api/surveys/[id]/snapshot', () => {
 		);
 		expect(snap.findings.every((f) => f.status === 'draft' && f.version >= 1)).toBe(true);
 		expect(snap.survey.findingCount).toBe(snap.findings.length);
+	});
+
+	it('hands back each capture exactly as it was recorded', async () => {
+		const snap = surveySnapshotSchema.parse((await getSnapshot(auditorA, inField)).body);
+		const iso = (t: string) => new Date(t).toISOString();
+		const seeded = demoFindings.filter((f) => f.surveyId === inField);
+		expect(seeded.length).toBeGreaterThanOrEqual(10);
+		for (const raw of seeded) {
+			const want = captureOf(raw);
+			const got = snap.findings.find((f) => f.capture.id === raw.id)?.capture;
+			expect(got, raw.id).toEqual({
+				...want,
+				createdAt: iso(want.createdAt),
+				updatedAt: iso(want.updatedAt)
+			});
+		}
 	});
 
 	it("carries the firm's change cursor as stored", async () => {

@@ -67,7 +67,8 @@ export async function seedDemoFindings(db: Db): Promise<void> {
 					resultsEngine: ENGINE_VERSION,
 					repairCost: finding.repairCost ?? null,
 					status: finding.status,
-					recordedAt: new Date(capture.createdAt)
+					recordedAt: new Date(capture.createdAt),
+					capturedAt: new Date(capture.updatedAt)
 				})
 				.onDuplicateKeyUpdate(keep);
 		}

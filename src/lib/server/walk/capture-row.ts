@@ -18,18 +18,20 @@ export type CaptureColumns = Pick<
 	| 'inputs'
 	| 'photoIds'
 	| 'recordedAt'
+	| 'capturedAt'
 	| 'createdAt'
 	| 'updatedAt'
 > & { assetTag: string | null };
 
 /**
  * The capture of a stored finding, validated with the shared schema (a row that fails it is
- * a server fault and throws). Recorded at is the device's time of recording when known; the
- * last change is never before it, as the schema demands, even when a device clock ran ahead.
+ * a server fault and throws). Times are the device's (recorded_at, captured_at) where stored,
+ * else the row's own; the last change is never before the recording, as the schema demands.
  */
 export function captureFromRow(row: CaptureColumns): FindingCapture {
 	const createdAt = row.recordedAt ?? row.createdAt;
-	const updatedAt = row.updatedAt < createdAt ? createdAt : row.updatedAt;
+	const changed = row.capturedAt ?? row.updatedAt;
+	const updatedAt = changed < createdAt ? createdAt : changed;
 	return findingCaptureSchema.parse({
 		id: row.id,
 		surveyId: row.surveyId,

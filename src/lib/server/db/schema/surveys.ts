@@ -112,7 +112,13 @@ export const findings = mysqlTable(
 		/** draft | reviewed | published | approved | scheduled | repaired | declined | verified */
 		status: word('status').notNull().default('draft'),
 		recordedBy: uuid('recorded_by').references(() => users.id),
+		/** The capture's createdAt: when the device recorded it. */
 		recordedAt: at('recorded_at'),
+		/**
+		 * The capture's updatedAt: when the device last changed it (updated_at also moves when the
+		 * Desk reviews the finding, which is no change to the capture).
+		 */
+		capturedAt: at('captured_at'),
 		deletedAt: at('deleted_at'),
 		version: version(),
 		changeSeq: changeSeq(),

@@ -1,0 +1,1 @@
+ALTER TABLE `findings` ADD `captured_at` datetime(3);
