@@ -96,7 +96,7 @@ export const surveySnapshotSchema = z.object({
 	cursor: z.number().int().nonnegative(),
 	takenAt: isoDateTime('Taken at'),
 	/** The unit system the person reads (their own choice, else the firm's default). */
-	unitSystem: z.enum(unitSystems),
+	unitSystem: z.enum(unitSystems, { error: 'Choose SI or US units' }),
 	survey: surveySummarySchema,
 	site: z.object({
 		id: uuidSchema,
@@ -119,7 +119,7 @@ export const walkPersonSchema = z.object({
 	id: uuidSchema,
 	name: z.string(),
 	email: z.string(),
-	role: z.enum(['admin', 'consultant', 'auditor', 'client']),
-	unitSystem: z.enum(unitSystems)
+	role: z.enum(['admin', 'consultant', 'auditor', 'client'], { error: 'Choose a role' }),
+	unitSystem: z.enum(unitSystems, { error: 'Choose SI or US units' })
 });
 export type WalkPerson = z.infer<typeof walkPersonSchema>;
