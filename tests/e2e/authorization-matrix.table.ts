@@ -52,6 +52,15 @@ const deskAction = (admin: Expectation, consultant: Expectation): Record<Who, Ex
 	client: 403
 });
 const mine = { own: 200, other: 404 } as const;
+/** A page of the Walk beyond its prerendered start page: the hooks' gate for the Walk. */
+const walkShell: Record<Who, Expectation> = {
+	anonymous: 'signin',
+	admin: 200,
+	consultant: 200,
+	auditor: 200,
+	client: 403
+};
+const unknownFinding = '00000000-0000-4000-8000-000000000000';
 
 /** 43 characters of the token alphabet that no link ever carried. */
 const unknownToken = 'Zz0_'.repeat(10) + 'Zz0';
@@ -63,6 +72,23 @@ export const matrix: Record<string, Record<string, Case>> = {
 	'/offline': { GET: { expect: every(200) } },
 	'/(walk)/walk': { GET: { expect: every(200) } },
 	'/api/health': { GET: { expect: every(200) } },
+	// The Walk's survey pages are client-rendered shells with no data in them (the device
+	// database fills them), so another firm's survey id reads the same empty shell.
+	'/(walk)/walk/surveys/[surveyId]': {
+		GET: { request: (t) => ({ path: `/walk/surveys/${t.surveyId}` }), expect: walkShell }
+	},
+	'/(walk)/walk/surveys/[surveyId]/findings/[findingId]': {
+		GET: {
+			request: (t) => ({ path: `/walk/surveys/${t.surveyId}/findings/${unknownFinding}` }),
+			expect: walkShell
+		}
+	},
+	'/(walk)/walk/surveys/[surveyId]/record/[kind]': {
+		GET: {
+			request: (t) => ({ path: `/walk/surveys/${t.surveyId}/record/trap` }),
+			expect: walkShell
+		}
+	},
 
 	'/signin': {
 		GET: { expect: signedIn(303, 200) },
