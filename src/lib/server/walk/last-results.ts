@@ -4,7 +4,7 @@
  * so a later survey's findings never show up as history, and the survey being walked never
  * counts as its own history.
  */
-import { and, desc, eq, inArray, isNull, lt, ne, sql } from 'drizzle-orm';
+import { and, desc, eq, isNotNull, isNull, lt, ne, sql } from 'drizzle-orm';
 import { TRAP_CONDITIONS, type TrapCondition } from '../../schemas/finding-vocabulary';
 import type { LastResult } from '../../schemas/snapshot';
 import { findings, surveys } from '../db/schema';
@@ -43,7 +43,8 @@ export async function lastResults(
 		.innerJoin(surveys, eq(surveys.id, findings.surveyId))
 		.where(
 			and(
-				inArray(findings.assetId, assetIds),
+				// The whole site's tagged tests, not an IN list that grows with the plant.
+				isNotNull(findings.assetId),
 				eq(findings.kind, 'trap'),
 				isNull(findings.deletedAt),
 				eq(surveys.siteId, survey.siteId),
@@ -56,8 +57,16 @@ export async function lastResults(
 			desc(startOf(surveys)),
 			desc(sql`COALESCE(${findings.recordedAt}, ${findings.createdAt})`)
 		);
+	const wanted = new Set(assetIds);
 	for (const r of rows) {
-		if (!r.assetId || out.has(r.assetId) || !r.condition || !conditions.has(r.condition)) continue;
+		if (
+			!r.assetId ||
+			!wanted.has(r.assetId) ||
+			out.has(r.assetId) ||
+			!r.condition ||
+			!conditions.has(r.condition)
+		)
+			continue;
 		out.set(r.assetId, {
 			surveyId: r.surveyId,
 			surveyName: r.surveyName,
