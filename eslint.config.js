@@ -23,6 +23,13 @@ const frameworkImports = [
 	}
 ];
 
+/** Engine modules import their neighbours directly: a barrel that re-exports them makes a cycle. */
+const barrelImports = {
+	// A path ending in index, a bare '.', '..', '../..', or one of the engine's barrel folders.
+	regex: '(^|/)index(\\.[jt]s)?$|^\\.{1,2}(/\\.\\.)*/?$|(^|/)(steam|units|heat|losses)/?$',
+	message: 'Import the module itself (e.g. ../saturation), not a barrel index that re-exports it.'
+};
+
 export default ts.config(
 	{
 		ignores: [
@@ -76,6 +83,14 @@ export default ts.config(
 	{
 		files: ['src/lib/steam/**', 'src/lib/units/**'],
 		rules: { 'no-restricted-imports': ['error', { patterns: frameworkImports }] }
+	},
+	{
+		// Barrels themselves, and the spec of the public barrel, are the only index importers.
+		files: ['src/lib/steam/**', 'src/lib/units/**'],
+		ignores: ['**/index.ts', '**/index.spec.ts'],
+		rules: {
+			'no-restricted-imports': ['error', { patterns: [...frameworkImports, barrelImports] }]
+		}
 	},
 	{
 		// Server-only code stays out of the browser: only server files and routes may import it.
