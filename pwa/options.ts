@@ -3,7 +3,7 @@ import { manifest } from './manifest.ts';
 
 /**
  * Service-worker strategy: cache only what the offline design needs.
- * - Precached at install: the app's JS, CSS, fonts, icons, the scanner's WebAssembly, the
+ * - Precached at install: the app's JS, CSS, fonts, icons, the tag scanner's WebAssembly (about 1.1 MB), the
  *   prerendered Walk shell and the offline page.
  * - Every navigation under /walk is answered with the precached Walk shell, online or not:
  *   the Walk renders on the device from the per-person device database, so a cold start, a
@@ -27,8 +27,6 @@ export const pwaOptions: SvelteKitPWAOptions = {
 			'client/**/*.{js,css,html,ico,png,svg,webp,woff,woff2,wasm,webmanifest}',
 			'prerendered/**/*.html'
 		],
-		// The scanner's decoder (about 1.1 MB) is precached so tags scan without signal.
-		maximumFileSizeToCacheInBytes: 3 * 1024 * 1024,
 		navigateFallback: '/walk',
 		navigateFallbackAllowlist: [/^\/walk(\/|$)/],
 		cleanupOutdatedCaches: true,

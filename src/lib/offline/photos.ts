@@ -11,8 +11,8 @@ import type { DeviceDatabase, DevicePhoto } from './db';
 /** Long side of a stored photo and of its thumbnail, px. */
 export const PHOTO_MAX_SIDE = 1920;
 export const THUMBNAIL_MAX_SIDE = 320;
-/** Size targets in the library's MB (2^20 bytes): 0.4 is 400 KiB for a photo, 40 KiB for a thumbnail. */
-export const PHOTO_MAX_MB = 0.4;
+/** Size targets in the library's MB (2^20 bytes): a photo at most 400 kB (400,000 bytes). */
+export const PHOTO_MAX_MB = 400_000 / 2 ** 20;
 export const THUMBNAIL_MAX_MB = 0.04;
 
 export interface PreparedPhoto {

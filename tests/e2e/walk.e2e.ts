@@ -1,0 +1,186 @@
+import { expect, test, type Locator, type Page } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { demoPassword, demoSurveys, demoUsers } from '../../src/lib/server/seed/demo';
+import { evaluateFinding } from '../../src/lib/steam/losses/evaluate';
+import { signInHere, waitForActiveWorker } from './support/worker';
+
+/**
+ * The auditor's round as they would do it: take the demo survey offline, cut the network,
+ * reload, record one finding of each kind with a photo, close the page and open it again.
+ */
+const survey = demoSurveys[0];
+const auditor = demoUsers.find((u) => u.email === 'auditor@cinderbrook.example')!;
+const round = `/walk/surveys/${survey.id}`;
+const photo = {
+	name: 'trap-photo.jpg',
+	mimeType: 'image/jpeg',
+	buffer: readFileSync(new URL('../fixtures/trap-photo.jpg', import.meta.url))
+};
+
+test.use({ viewport: { width: 390, height: 844 } });
+
+/** The device database rows this test reads back (raw IndexedDB, as stored by Dexie). */
+async function deviceRows(page: Page) {
+	return page.evaluate(async (name) => {
+		const db = await new Promise<IDBDatabase>((ok, fail) => {
+			const r = indexedDB.open(name);
+			r.onsuccess = () => ok(r.result);
+			r.onerror = () => fail(r.error);
+		});
+		const all = (store: string) =>
+			new Promise<unknown[]>((ok) => {
+				const r = db.transaction(store).objectStore(store).getAll();
+				r.onsuccess = () => ok(r.result);
+			});
+		const [findings, sites, photos, outbox] = await Promise.all(
+			['findings', 'sites', 'photos', 'outbox'].map(all)
+		);
+		const photoFacts = await Promise.all(
+			(
+				photos as { id: string; findingId: string; blob: Blob; width: number; height: number }[]
+			).map(async (p) => {
+				const head = new Uint8Array(await p.blob.slice(0, 4096).arrayBuffer());
+				const text = String.fromCharCode(...head);
+				return {
+					id: p.id,
+					findingId: p.findingId,
+					bytes: p.blob.size,
+					type: p.blob.type,
+					width: p.width,
+					height: p.height,
+					exif: text.includes('Exif')
+				};
+			})
+		);
+		db.close();
+		return { findings, sites, photos: photoFacts, outbox } as {
+			findings: { id: string; kind: string; pending: number; capture: never }[];
+			sites: { costBasis: never; headers: never }[];
+			photos: typeof photoFacts;
+			outbox: { recordId: string; op: string; payload: unknown }[];
+		};
+	}, `steamwisp-user-${auditor.id}`);
+}
+
+async function addPhoto(page: Page) {
+	await page.getByLabel('Add photo').setInputFiles(photo);
+	await expect(page.getByTestId('photo-thumb')).toHaveCount(1, { timeout: 20_000 });
+}
+
+async function save(page: Page) {
+	await page.getByRole('button', { name: 'Save', exact: true }).click();
+	await expect(page).toHaveURL(round);
+}
+
+test('a whole round offline: one finding of each kind with a photo, kept through a closed page', async ({
+	page,
+	context
+}) => {
+	test.setTimeout(120_000);
+	await signInHere(page, auditor.email, demoPassword);
+	await waitForActiveWorker(page);
+	const card = page.locator(`[data-survey="${survey.id}"]`);
+	await card.getByRole('button', { name: 'Take offline' }).click();
+	await expect(card.getByText('On this device since')).toBeVisible();
+
+	await context.setOffline(true);
+	await page.reload();
+	await expect(page.getByRole('status')).toContainText('No signal');
+	await card.getByRole('link', { name: 'Open the round' }).click();
+	await expect(page.getByRole('heading', { name: survey.name })).toBeVisible();
+
+	// A working trap test on a tag already on record: counted taps from the open survey.
+	let taps = 0;
+	const tap = async (target: Locator) => {
+		taps++;
+		await target.click();
+	};
+	const firstTag = page.locator('[data-tag]').first();
+	const tag = (await firstTag.getAttribute('data-tag'))!;
+	await tap(firstTag);
+	await expect(page.getByLabel('Tag')).toHaveValue(tag);
+	await expect(page.getByText(/Last tested/)).toBeVisible();
+	await tap(page.getByText('Working', { exact: true }));
+	await tap(page.getByRole('button', { name: 'Save', exact: true }));
+	await expect(page).toHaveURL(round);
+	expect(taps).toBeLessThanOrEqual(5);
+	await expect(page.locator(`[data-tag="${tag}"]`)).toHaveCount(0);
+
+	// A trap failed open, with a photo.
+	await page.locator('[data-tag]').first().click();
+	await page.getByText('Failed open', { exact: true }).click();
+	await expect(page.getByTestId('estimate').locator('[data-figure="steam"]')).toBeVisible();
+	await addPhoto(page);
+	await save(page);
+
+	// A leak judged by its plume.
+	await page.locator('[data-record="leak"]').click();
+	await page.getByLabel('Location').fill('Valve gallery, second isolating valve');
+	await page.getByLabel('Leaking from').selectOption({ label: 'Valve stem or gland' });
+	await page.getByLabel('Header', { exact: true }).selectOption({ index: 1 });
+	await page.getByText('Judge it by the plume').click();
+	await page.getByText(/^Medium:/).click();
+	await expect(page.getByText(/invisible near the orifice/).first()).toBeVisible();
+	await addPhoto(page);
+	await save(page);
+
+	// An insulation gap on a bare pipe run.
+	await page.locator('[data-record="insulation"]').click();
+	await page.getByLabel('Location').fill('Roof run to the evaporators');
+	await page.getByText('Pipe run', { exact: true }).click();
+	await page.getByLabel('Pipe size').selectOption({ label: 'DN 50' });
+	await page.getByLabel('Bare length').fill('6');
+	await page.getByText('From the header it carries').click();
+	await page.getByLabel('Header', { exact: true }).selectOption({ index: 1 });
+	await addPhoto(page);
+	await save(page);
+
+	// A header reading.
+	await page.locator('[data-record="header"]').click();
+	await page.getByLabel('Header', { exact: true }).selectOption({ index: 1 });
+	await page.getByLabel('Gauge pressure').fill('9.6');
+	await page.getByLabel('Temperature').fill('186');
+	await expect(page.getByText(/saturat/i).first()).toBeVisible();
+	await addPhoto(page);
+	await save(page);
+
+	// Close the page, open the Walk again without a network.
+	await page.close();
+	const again = await context.newPage();
+	await again.goto(round);
+	await again.getByRole('button', { name: /^Recorded/ }).click();
+	const rows = await deviceRows(again);
+	const mine = rows.findings.filter((f) => f.pending === 1);
+	expect(mine.map((f) => f.kind).sort()).toEqual(['header', 'insulation', 'leak', 'trap', 'trap']);
+	expect(rows.outbox.filter((e) => e.op === 'upsert').length).toBeGreaterThanOrEqual(5);
+
+	// Photos: compressed on the device, location stripped, long side ≤ 1920 px, ≤ 400 kB.
+	expect(rows.photos).toHaveLength(4);
+	for (const p of rows.photos) {
+		expect(Math.max(p.width, p.height)).toBeLessThanOrEqual(1920);
+		expect(p.bytes).toBeLessThanOrEqual(400_000);
+		expect(p.exif).toBe(false);
+	}
+
+	// Every finding is there with its estimate and its photo; the device's figure is the engine's.
+	const site = rows.sites[0];
+	for (const f of mine) {
+		await again.goto(`${round}/findings/${f.id}`);
+		const estimate = again.getByTestId('estimate');
+		const engine = evaluateFinding(f.capture, { costBasis: site.costBasis, headers: site.headers });
+		const figure = async (key: string) =>
+			Number(await estimate.locator(`[data-figure="${key}"]`).getAttribute('data-value'));
+		if (f.kind === 'header') {
+			// A reading loses nothing: its figures are the state of the steam at the header.
+			expect(await figure('saturation')).toBeCloseTo(engine.header!.saturationTemperature, 6);
+			expect(await figure('superheat')).toBeCloseTo(engine.header!.superheat!, 6);
+		} else {
+			expect(await figure('heat')).toBeCloseTo(engine.heatLoss, 6);
+			expect(await figure('cost')).toBeCloseTo(engine.cost.amount, 2);
+			if (engine.steamLoss !== null) expect(await figure('steam')).toBeCloseTo(engine.steamLoss, 6);
+		}
+		const photos = rows.photos.filter((p) => p.findingId === f.id).length;
+		await expect(again.getByTestId('photo-thumb')).toHaveCount(photos);
+	}
+	await context.setOffline(false);
+});
