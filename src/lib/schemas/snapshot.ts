@@ -6,7 +6,6 @@
 import { z } from 'zod';
 import { dnSchema, uuidSchema } from './common';
 import { findingCaptureSchema, isoDateTime } from './capture';
-import { diameterSchema } from './finding-inputs';
 import {
 	FINDING_STATUSES,
 	TRAP_CONDITIONS,
@@ -15,6 +14,7 @@ import {
 } from './finding-vocabulary';
 import { unitSystems } from './roles';
 import { costBasisSchema, headerSchema } from './site';
+import { INPUT_LIMITS, limitedNumber } from './ranges';
 import { surveyStageSchema } from './survey';
 
 const dateOnly = z.iso.date({ error: 'Must be a date' }).nullable();
@@ -50,9 +50,9 @@ export type Area = z.infer<typeof areaSchema>;
 export const trapAssetDetailsSchema = z.object({
 	trapType: z.enum(TRAP_TYPES, { error: 'Choose the trap’s type' }),
 	dn: dnSchema,
-	orificeDiameter: diameterSchema('Orifice diameter', 0.05).optional(),
+	orificeDiameter: limitedNumber('Orifice diameter', INPUT_LIMITS.trap.orificeDiameter).optional(),
 	discharge: z.enum(TRAP_DISCHARGES, { error: 'Choose where the trap discharges' }).optional(),
-	backPressure: z.number().positive().optional()
+	backPressure: limitedNumber('Back pressure', INPUT_LIMITS.trap.backPressure).optional()
 });
 export type TrapAssetDetails = z.infer<typeof trapAssetDetailsSchema>;
 
