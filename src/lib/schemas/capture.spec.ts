@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { lossSite, mainsHeader } from '../../../tests/fixtures/loss-site';
+import { evaluateFinding } from '../steam/losses/evaluate';
 import { findingCaptureSchema } from './capture';
 import { findingSchema } from './finding';
 
@@ -93,6 +95,26 @@ describe('findingCaptureSchema', () => {
 		expect(messages(findingCaptureSchema.safeParse(cold))).toEqual([
 			'inputs.inletTemperature: Inlet temperature must be between 233.15 K (−40 °C) and 1073.15 K (800 °C)'
 		]);
+	});
+});
+
+describe('a capture and a stored finding', () => {
+	it('both go straight into the engine’s evaluateFinding', () => {
+		const capture = findingCaptureSchema.parse({ ...captures.leak, headerId: mainsHeader.id });
+		const stored = findingSchema.parse({
+			...capture,
+			status: 'reviewed',
+			repairCost: 20_000,
+			reviewed: true,
+			version: 3,
+			deleted: false
+		});
+		const fromCapture = evaluateFinding(capture, lossSite);
+		const fromStored = evaluateFinding(stored, lossSite);
+		expect(fromCapture.steamLoss).toBeGreaterThan(0);
+		expect(fromStored.cost).toEqual(fromCapture.cost);
+		expect(fromCapture.repairCost).toBeNull();
+		expect(fromStored.repairCost?.minor).toBe(20_000);
 	});
 });
 
