@@ -88,7 +88,7 @@ test('an invited consultant sets a password, signs in, resets it; used links are
 	// …and signs in as a consultant.
 	await signIn(person, invitee, firstPassword);
 	await expect(person).toHaveURL((u) => u.pathname === '/desk');
-	await expect(person.getByText('Noor Castellanos · consultant')).toBeVisible();
+	await expect(person.getByText('Noor Castellanos, consultant')).toBeVisible();
 
 	// The invitation link is spent.
 	const again = await open(person, inviteLink);
