@@ -1,44 +1,29 @@
 /**
- * The Walk's figures: a finding priced on the device by the same engine the server uses, and
- * the words and units it is shown in. Pure: no Svelte, no Dexie.
+ * A finding on the round priced on the device by the same engine the server uses; shown with
+ * the capture form's own figure words (src/lib/components/walk/form/display.ts).
  */
 import type { DeviceSite } from '$lib/offline/db';
 import type { FindingCapture } from '$lib/schemas/capture';
 import { evaluateFinding, type FindingEvaluation } from '$lib/steam/index';
-import { formatQuantity, formatSignificant } from '$lib/units/index';
+import { showFigure } from '$lib/components/walk/form/display';
+import type { FigureKey } from '$lib/components/walk/form/estimate';
 
-/** The engine's estimate for a capture, or the reason there is none (in plain words). */
-export function estimate(
-	capture: FindingCapture,
-	site: DeviceSite
-): { evaluation: FindingEvaluation } | { problem: string } {
-	if (site.costBasis === null) {
-		return { problem: 'No cost basis for this site yet: the consultant sets it at the desk.' };
-	}
+/** The engine's evaluation of a stored capture, or null when it cannot be priced yet. */
+export function priced(capture: FindingCapture, site: DeviceSite): FindingEvaluation | null {
+	if (site.costBasis === null) return null;
 	try {
-		return { evaluation: evaluateFinding(capture, site) };
-	} catch (e) {
-		return { problem: (e as Error).message };
+		return evaluateFinding(capture, site);
+	} catch {
+		return null;
 	}
 }
 
-/** kg/h from the engine, shown in the person's units. */
-export const steamText = (kgPerHour: number | null, site: DeviceSite) =>
-	formatQuantity(kgPerHour === null ? null : kgPerHour / 3600, 'massFlow', site.unitSystem);
-
-export const heatText = (kW: number, site: DeviceSite) =>
-	formatQuantity(kW * 1000, 'power', site.unitSystem);
-
-export const fuelText = (gjPerYear: number, site: DeviceSite) =>
-	`${formatQuantity(gjPerYear * 1e9, 'energy', site.unitSystem)}/yr`;
-
-/** CO2 in metric tonnes per year, as emission reports give it in either unit system. */
-export const co2Text = (kgPerYear: number) => `${formatSignificant(kgPerYear / 1000)} t CO₂/yr`;
-
-export function moneyText(amount: number, currency: string): string {
-	return new Intl.NumberFormat(undefined, {
-		style: 'currency',
-		currency,
-		maximumFractionDigits: amount >= 100 ? 0 : 2
-	}).format(amount);
+/** A figure in the engine's base unit (steam kg/h, heat kW, fuel GJ/yr, cost, CO2 kg/yr …) as words. */
+export function figureText(
+	key: FigureKey,
+	value: number,
+	site: DeviceSite,
+	currency: string | null = null
+) {
+	return showFigure({ key, value }, site.unitSystem, currency);
 }
