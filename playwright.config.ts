@@ -1,4 +1,5 @@
 import { defineConfig } from '@playwright/test';
+import { chromiumLaunchOptions } from './tests/e2e/support/chromium';
 import { appEnv, appOrigin as origin, appPort as port, e2eMail } from './tests/e2e/support/servers';
 
 /**
@@ -18,19 +19,7 @@ export default defineConfig({
 		baseURL: origin,
 		serviceWorkers: 'allow',
 		screenshot: 'only-on-failure',
-		launchOptions: {
-			executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-			args: [
-				'--no-sandbox',
-				'--disable-gpu',
-				'--disable-dev-shm-usage',
-				'--disable-quic',
-				'--no-first-run',
-				'--disable-background-networking',
-				'--disable-component-update',
-				'--disable-sync'
-			]
-		}
+		launchOptions: chromiumLaunchOptions
 	},
 	webServer: [
 		{

@@ -12,6 +12,7 @@ import { readFileSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
 import { chromium, type Page } from '@playwright/test';
 import { demoPassword, demoSurveys } from '../src/lib/server/seed/demo';
+import { chromiumLaunchOptions } from '../tests/e2e/support/chromium';
 import { waitForActiveWorker } from '../tests/e2e/support/worker';
 import { benchFindings } from './bench-walk-findings';
 
@@ -41,19 +42,7 @@ async function waitForApp() {
 
 const browser = await (async () => {
 	await waitForApp();
-	return chromium.launch({
-		executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-		args: [
-			'--no-sandbox',
-			'--disable-gpu',
-			'--disable-dev-shm-usage',
-			'--disable-quic',
-			'--no-first-run',
-			'--disable-background-networking',
-			'--disable-component-update',
-			'--disable-sync'
-		]
-	});
+	return chromium.launch(chromiumLaunchOptions);
 })();
 
 async function signIn(page: Page) {
