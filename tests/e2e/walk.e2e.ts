@@ -182,5 +182,26 @@ test('a whole round offline: one finding of each kind with a photo, kept through
 		const photos = rows.photos.filter((p) => p.findingId === f.id).length;
 		await expect(again.getByTestId('photo-thumb')).toHaveCount(photos);
 	}
+
+	// A photo can be taken off a finding, and a finding off the survey, still without signal.
+	const leak = mine.find((f) => f.kind === 'leak')!;
+	await again.goto(`${round}/findings/${leak.id}`);
+	await again.getByRole('button', { name: 'Delete photo 1' }).click();
+	await again.getByRole('button', { name: 'Yes, delete photo 1' }).click();
+	await expect(again.getByTestId('photo-thumb')).toHaveCount(0);
+	await again.getByRole('button', { name: 'Save', exact: true }).click();
+	await expect(again).toHaveURL(round);
+	const header = mine.find((f) => f.kind === 'header')!;
+	await again.goto(`${round}/findings/${header.id}`);
+	await again.getByRole('button', { name: 'Delete this finding…' }).click();
+	await again.getByRole('button', { name: 'Yes, delete it' }).click();
+	await expect(again).toHaveURL(round);
+	const after = await deviceRows(again);
+	expect(after.findings.some((f) => f.id === header.id)).toBe(false);
+	expect(after.photos.filter((p) => p.findingId === leak.id)).toHaveLength(0);
+	const leakRow = after.findings.find((f) => f.id === leak.id) as unknown as {
+		capture: { photoIds: string[] };
+	};
+	expect(leakRow.capture.photoIds).toEqual([]);
 	await context.setOffline(false);
 });
