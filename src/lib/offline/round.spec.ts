@@ -3,7 +3,15 @@ import type { FindingCapture } from '$lib/schemas/capture';
 import type { Area } from '$lib/schemas/snapshot';
 import type { FindingEvaluation } from '$lib/steam/losses/evaluate';
 import type { DeviceAsset, DeviceFinding } from './db';
-import { areaCounts, areaNames, filterFindings, NO_AREA, roundTotals, trapsToTest } from './round';
+import {
+	areaCounts,
+	areaNames,
+	filterFindings,
+	NO_AREA,
+	prepareSearch,
+	roundTotals,
+	trapsToTest
+} from './round';
 import {
 	AREA_BOILER,
 	AREA_DRYER,
@@ -75,6 +83,16 @@ describe('filterFindings', () => {
 		expect(ids(filterFindings(all, { text: 'boiler house' }))).toEqual([]);
 		expect(ids(filterFindings(all, { text: 'st-120' }, names))).toEqual(ids([working]));
 		expect(ids(filterFindings(all, { text: 'kuhler' }, names))).toEqual(ids([working]));
+	});
+
+	it('finds the same after the search strings were prepared ahead, area names included', () => {
+		const fresh = all.map((f) => ({ ...f }));
+		prepareSearch(fresh, names);
+		expect(ids(filterFindings(fresh, { text: 'boiler house' }, names))).toEqual(ids([failed]));
+		// Prepared without the area names, a search with them still sees the names.
+		const bare = all.map((f) => ({ ...f }));
+		prepareSearch(bare);
+		expect(ids(filterFindings(bare, { text: 'dryer' }, names))).toEqual(ids([working, leak]));
 	});
 
 	it('sees a changed finding’s new text (a changed finding is a new object)', () => {

@@ -58,6 +58,17 @@ function searchable(finding: DeviceFinding, names: ReadonlyMap<string, string>):
 const NO_NAMES: ReadonlyMap<string, string> = new Map();
 
 /**
+ * Builds every finding's search string ahead of the first keystroke (call it when a list is
+ * shown), so no keystroke pays for building them.
+ */
+export function prepareSearch(
+	list: readonly DeviceFinding[],
+	names: ReadonlyMap<string, string> = NO_NAMES
+): void {
+	for (const f of list) searchable(f, names);
+}
+
+/**
  * The findings that match every given part of the filter, in the list's order.
  * `tag` is a case-insensitive prefix of the asset tag; `text` is split into words, each of
  * which must appear in the location, notes, tag or area name (the names come from
