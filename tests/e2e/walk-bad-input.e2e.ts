@@ -66,6 +66,12 @@ test('each capture form refuses bad values in SI words and units, keeps them, an
 	await page.reload();
 	await expect(page.getByLabel('Gauge pressure')).toHaveValue('400');
 	await expect(page.getByText('Restored what you typed earlier on this device.')).toBeVisible();
+	// Only a confirmed Discard throws the draft away.
+	await page.getByRole('button', { name: 'Discard…' }).click();
+	await page.getByRole('button', { name: 'Discard', exact: true }).click();
+	await expect(page.getByLabel('Gauge pressure')).toHaveValue('');
+	await page.reload();
+	await expect(page.getByLabel('Gauge pressure')).toHaveValue('');
 
 	// Nothing wrong was saved.
 	await page.goto(`/walk/surveys/${survey.id}`);
