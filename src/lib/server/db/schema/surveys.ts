@@ -132,14 +132,22 @@ export const findings = mysqlTable(
 	]
 );
 
-/** A photo of a finding; the bytes live in photo storage under `storageKey`. */
+/**
+ * A photo of a finding; the bytes live in photo storage under `storageKey`. A photo may arrive
+ * before its finding's push (docs/sync.md), so `finding_id` has no foreign key; the survey and
+ * firm do, and carry the photo's authorization.
+ */
 export const photos = mysqlTable(
 	'photos',
 	{
 		id: id(),
-		findingId: uuid('finding_id')
+		findingId: uuid('finding_id').notNull(),
+		surveyId: uuid('survey_id')
 			.notNull()
-			.references(() => findings.id),
+			.references(() => surveys.id),
+		firmId: uuid('firm_id')
+			.notNull()
+			.references(() => firms.id),
 		storageKey: varchar('storage_key', { length: 255 }).notNull(),
 		contentType: varchar('content_type', { length: 64 }).notNull(),
 		bytes: int('bytes').notNull(),
@@ -153,7 +161,7 @@ export const photos = mysqlTable(
 		changeSeq: changeSeq(),
 		createdAt: createdAt()
 	},
-	(t) => [index('photos_finding_idx').on(t.findingId)]
+	(t) => [index('photos_finding_idx').on(t.findingId), index('photos_survey_idx').on(t.surveyId)]
 );
 
 export type FindingRow = typeof findings.$inferSelect;
