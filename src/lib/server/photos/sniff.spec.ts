@@ -1,0 +1,76 @@
+import { readFileSync } from 'node:fs';
+import { deflateSync } from 'node:zlib';
+import { describe, expect, it } from 'vitest';
+import { sniffPhoto } from './sniff';
+
+const jpeg = new Uint8Array(readFileSync('tests/fixtures/trap-photo.jpg'));
+
+function crc32(b: Uint8Array): number {
+	let c = ~0;
+	for (const v of b) {
+		c ^= v;
+		for (let k = 0; k < 8; k++) c = (c >>> 1) ^ (0xedb88320 & -(c & 1));
+	}
+	return ~c >>> 0;
+}
+
+function chunk(type: string, data: Uint8Array): Buffer {
+	const head = Buffer.alloc(8);
+	head.writeUInt32BE(data.length, 0);
+	head.write(type, 4, 'ascii');
+	const crc = Buffer.alloc(4);
+	crc.writeUInt32BE(crc32(Buffer.concat([head.subarray(4), data])), 0);
+	return Buffer.concat([head, data, crc]);
+}
+
+/** A 1×1 RGB PNG, built by hand (PNG spec, W3C: signature, IHDR, IDAT, IEND). */
+function png1x1(): Uint8Array {
+	const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
+	const idat = deflateSync(Buffer.from([0, 200, 100, 50]));
+	return new Uint8Array(
+		Buffer.concat([
+			Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+			chunk('IHDR', ihdr),
+			chunk('IDAT', idat),
+			chunk('IEND', new Uint8Array())
+		])
+	);
+}
+
+function webp(): Uint8Array {
+	const body = Buffer.concat([Buffer.from('WEBPVP8L'), Buffer.alloc(12)]);
+	const head = Buffer.alloc(8);
+	head.write('RIFF', 0, 'ascii');
+	head.writeUInt32LE(body.length, 4);
+	return new Uint8Array(Buffer.concat([head, body]));
+}
+
+const text = (s: string) => new TextEncoder().encode(s);
+
+describe('sniffPhoto', () => {
+	it('reads JPEG, PNG and WebP from their bytes', () => {
+		expect(sniffPhoto(jpeg)).toBe('image/jpeg');
+		expect(sniffPhoto(png1x1())).toBe('image/png');
+		expect(sniffPhoto(webp())).toBe('image/webp');
+	});
+
+	it('refuses SVG, HTML and GIF', () => {
+		expect(sniffPhoto(text('<svg xmlns="http://www.w3.org/2000/svg"></svg>'))).toBeNull();
+		expect(sniffPhoto(text('<!doctype html><script>alert(1)</script>'))).toBeNull();
+		expect(sniffPhoto(text('GIF89a\x01\x00\x01\x00'))).toBeNull();
+	});
+
+	it('refuses a JPEG with a zip appended, even one ending in FF D9', () => {
+		const zip = Buffer.from([0x50, 0x4b, 0x03, 0x04, 1, 2, 3, 4]);
+		expect(sniffPhoto(new Uint8Array(Buffer.concat([jpeg, zip])))).toBeNull();
+		const sly = Buffer.concat([jpeg, zip, Buffer.from([0xff, 0xd9])]);
+		expect(sniffPhoto(new Uint8Array(sly))).toBeNull();
+	});
+
+	it('refuses a PNG with trailing data, a truncated JPEG and a WebP of the wrong size', () => {
+		const p = png1x1();
+		expect(sniffPhoto(new Uint8Array([...p, 0]))).toBeNull();
+		expect(sniffPhoto(jpeg.subarray(0, jpeg.length - 10))).toBeNull();
+		expect(sniffPhoto(new Uint8Array([...webp(), 0, 0]))).toBeNull();
+	});
+});
