@@ -8,3 +8,4 @@ export * from './schema/surveys';
 export * from './schema/client';
 export * from './schema/audit';
 export * from './schema/auth';
+export * from './schema/sync';

@@ -34,6 +34,10 @@ export const appliedMutations = mysqlTable('applied_mutations', {
 	userId: uuid('user_id')
 		.notNull()
 		.references(() => users.id),
+	/** The device that sent it, and the firm it was applied in (null for rows before sync). */
+	deviceId: uuid('device_id'),
+	firmId: uuid('firm_id').references(() => firms.id),
+	/** The first answer given, returned again to a replay. */
 	outcome: json('outcome'),
 	createdAt: createdAt()
 });

@@ -35,7 +35,11 @@ export const surveys = mysqlTable(
 		createdAt: createdAt(),
 		updatedAt: updatedAt()
 	},
-	(t) => [index('surveys_firm_idx').on(t.firmId), index('surveys_site_idx').on(t.siteId)]
+	(t) => [
+		index('surveys_firm_idx').on(t.firmId),
+		index('surveys_site_idx').on(t.siteId),
+		index('surveys_change_idx').on(t.firmId, t.changeSeq)
+	]
 );
 
 /** Which auditors may record on which survey. */
