@@ -203,5 +203,11 @@ test('a whole round offline: one finding of each kind with a photo, kept through
 		capture: { photoIds: string[] };
 	};
 	expect(leakRow.capture.photoIds).toEqual([]);
+
+	// Changes still on the device: signing out asks first.
+	await again.getByRole('button', { name: 'Sign out' }).click();
+	await expect(again.getByTestId('unsent-warning')).toContainText('not reached the server');
+	await again.getByRole('button', { name: 'Stay signed in' }).click();
+	await expect(again.getByTestId('unsent-warning')).toHaveCount(0);
 	await context.setOffline(false);
 });
