@@ -14,22 +14,12 @@ import {
 	siteScope,
 	surveyScope
 } from '../../src/lib/server/policy';
-import { demoSites, demoSurveys, demoUsers } from '../../src/lib/server/seed/demo';
+import { demoSites, demoSurveys } from '../../src/lib/server/seed/demo';
 import { publishedSurveyId } from '../../src/lib/server/seed/findings';
 import { testDatabase } from './db';
+import { adminA, consultantA, auditorA, clientA, adminB, clientB } from './demo-people';
 
 const { pool, db } = testDatabase();
-
-const person = (email: string): SessionUser => {
-	const u = demoUsers.find((d) => d.email === email)!;
-	return { ...u, clientCompanyId: u.clientCompanyId ?? null };
-};
-const adminA = person('admin@cinderbrook.example');
-const consultantA = person('consultant@cinderbrook.example');
-const auditorA = person('auditor@cinderbrook.example');
-const clientA = person('plant.manager@larkspindle-dairy.example');
-const adminB = person('admin@northgale.example');
-const clientB = person('mill.manager@tarnwhistle-paper.example');
 
 const inFieldA = demoSurveys[0].id;
 const surveyB = demoSurveys[1].id;

@@ -12,25 +12,23 @@ import {
 } from '../../src/lib/schemas/snapshot';
 import { pool as appPool } from '../../src/lib/server/db';
 import * as schema from '../../src/lib/server/db/schema';
-import { demoSites, demoSurveys, demoUsers } from '../../src/lib/server/seed/demo';
+import { demoSites, demoSurveys } from '../../src/lib/server/seed/demo';
 import { captureOf, demoFindings, publishedSurveyId } from '../../src/lib/server/seed/findings';
 import { testDatabase } from './db';
+import {
+	adminA,
+	consultantA,
+	auditorA,
+	clientA,
+	adminB,
+	consultantB,
+	auditorB,
+	clientB
+} from './demo-people';
 import { getMe, getSnapshot, getSurveys } from './walk-api';
 
 const { pool, db } = testDatabase();
 
-const person = (email: string): SessionUser => {
-	const u = demoUsers.find((d) => d.email === email)!;
-	return { ...u, clientCompanyId: u.clientCompanyId ?? null };
-};
-const adminA = person('admin@cinderbrook.example');
-const consultantA = person('consultant@cinderbrook.example');
-const auditorA = person('auditor@cinderbrook.example');
-const clientA = person('plant.manager@larkspindle-dairy.example');
-const adminB = person('admin@northgale.example');
-const consultantB = person('consultant@northgale.example');
-const auditorB = person('auditor@northgale.example');
-const clientB = person('mill.manager@tarnwhistle-paper.example');
 const inField = demoSurveys[0].id;
 const firmA = adminA.firmId;
 
