@@ -7,6 +7,8 @@ declare global {
 	namespace App {
 		interface Error {
 			message: string;
+			/** Which fields of a request failed their checks (API answers to bad input). */
+			issues?: { path: string; message: string }[];
 		}
 		interface Locals {
 			user: SessionUser | null;

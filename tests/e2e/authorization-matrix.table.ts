@@ -182,6 +182,18 @@ export const matrix: Record<string, Record<string, Case>> = {
 		}
 	},
 
+	// Sync (docs/sync.md): the matrix posts a form, which is no JSON batch: a 400 for those
+	// who may push at all. Tenancy of pushed ids is covered by tests/integration/sync-push.spec.ts.
+	'/api/sync/push': {
+		POST: { expect: { anonymous: 401, admin: 400, consultant: 400, auditor: 400, client: 403 } }
+	},
+	'/api/sync/pull': {
+		GET: {
+			request: () => ({ path: '/api/sync/pull?since=0' }),
+			expect: { anonymous: 401, admin: 200, consultant: 200, auditor: 200, client: 403 }
+		}
+	},
+
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }
 	}

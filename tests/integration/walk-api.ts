@@ -6,20 +6,22 @@ import { GET as snapshot } from '../../src/routes/api/surveys/[id]/snapshot/+ser
 
 type Handler = (event: never) => Response | Promise<Response>;
 
-async function call(
+export async function call(
 	handler: Handler,
 	routeId: string,
 	user: SessionUser | null,
 	path: string,
-	params: Record<string, string> = {}
+	params: Record<string, string> = {},
+	init?: RequestInit
 ): Promise<{ status: number; body: unknown; headers: Headers }> {
 	const url = new URL(`http://127.0.0.1${path}`);
 	const event = {
 		locals: { user, session: null },
 		params,
 		url,
-		request: new Request(url),
-		route: { id: routeId }
+		request: new Request(url, init),
+		route: { id: routeId },
+		getClientAddress: () => '127.0.0.1'
 	};
 	try {
 		const res = await handler(event as never);

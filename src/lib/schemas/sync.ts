@@ -44,6 +44,9 @@ export const deleteMutationSchema = z.strictObject({
 	data: z.strictObject({ surveyId: uuidSchema })
 });
 
+export type UpsertMutation = z.infer<typeof upsertMutationSchema>;
+export type DeleteMutation = z.infer<typeof deleteMutationSchema>;
+
 export const mutationSchema = z
 	.discriminatedUnion('op', [upsertMutationSchema, deleteMutationSchema], {
 		error: 'op must be "upsert" or "delete"'

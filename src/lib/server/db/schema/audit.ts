@@ -17,6 +17,8 @@ export const auditLog = mysqlTable(
 		before: json('before'),
 		after: json('after'),
 		address: varchar('address', { length: 64 }),
+		/** The device a synced change came from (docs/sync.md); null for changes made in a page. */
+		deviceId: uuid('device_id'),
 		createdAt: createdAt()
 	},
 	(t) => [

@@ -132,7 +132,9 @@ export const findings = mysqlTable(
 	(t) => [
 		index('findings_survey_idx').on(t.surveyId),
 		index('findings_asset_idx').on(t.assetId),
-		index('findings_change_idx').on(t.surveyId, t.changeSeq)
+		index('findings_change_idx').on(t.surveyId, t.changeSeq),
+		// A pull reads findings of many surveys after one cursor, in counter order.
+		index('findings_seq_idx').on(t.changeSeq)
 	]
 );
 
