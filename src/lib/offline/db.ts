@@ -4,6 +4,7 @@ import type { FindingKind, FindingStatus, TrapCondition } from '$lib/schemas/fin
 import type { CostBasis } from '$lib/schemas/site';
 import type { Area, AssetSnapshot, SiteHeader, SurveySummary } from '$lib/schemas/snapshot';
 import { upgradeToV2 } from './upgrade-v2';
+import { upgradeToV3 } from './upgrade-v3';
 
 /**
  * The device's own database (IndexedDB through Dexie). Everything an auditor records lands
@@ -19,6 +20,11 @@ export interface DeviceSurvey extends SurveySummary {
 	/** Server change cursor the snapshot was taken at; sync pulls from here. */
 	cursor: number;
 	takenAt: string;
+	/**
+	 * 1 = the server withdrew the survey from this person (unassigned, closed) while something
+	 * of it still waited to send here: kept so nothing is lost; the Walk should say so.
+	 */
+	withdrawn?: 1;
 }
 
 export interface DeviceSite {
@@ -56,6 +62,11 @@ export interface DeviceFinding {
 	pending: 0 | 1;
 	deleted: 0 | 1;
 	updatedAt: string;
+	/**
+	 * 1 = the server kept another edit of this finding and holds this device's as a conflict
+	 * (see `conflicts`); the device keeps the auditor's version until the Desk settles it.
+	 */
+	conflict?: 1;
 }
 
 export interface DevicePhoto {
@@ -72,6 +83,8 @@ export interface DevicePhoto {
 	bytes: number;
 	uploaded: 0 | 1;
 	createdAt: string;
+	/** Why the server refused the last upload (plain words); the photo is skipped until changed. */
+	lastError?: string;
 }
 
 export interface DeviceDraft {
@@ -95,6 +108,8 @@ export interface OutboxEntry {
 	baseVersion: number;
 	/** The capture, exactly what `POST /api/sync/push` takes as `data`; null for a delete. */
 	payload: FindingCapture | null;
+	/** The finding's survey (set from version 3; a delete's push names it). */
+	surveyId?: string;
 	attempts: number;
 	lastError?: string;
 	createdAt: string;
@@ -112,6 +127,30 @@ export interface SetAsideRow {
 	row: unknown;
 	reason: string;
 	setAsideAt: string;
+}
+
+/** Small device facts kept by key (`MetaKey`). */
+export interface MetaRow {
+	key: MetaKey;
+	value: unknown;
+}
+/**
+ * deviceId: this device's UUID (made once); cursor: the server change counter pulled up to;
+ * lastExchangeAt: ISO time of the last whole exchange; lastProblem: plain words or null.
+ */
+export type MetaKey = 'deviceId' | 'cursor' | 'lastExchangeAt' | 'lastProblem';
+
+/** An edit of this device the server kept as a conflict (docs/sync.md): shown until settled. */
+export interface DeviceConflict {
+	mutationId: string;
+	recordId: string;
+	surveyId: string;
+	/** The device's capture; null for a delete. */
+	capture: FindingCapture | null;
+	/** The server's version of the finding when it answered. */
+	serverVersion: number;
+	reason: string;
+	createdAt: string;
 }
 
 /** What the round's list is narrowed to (round.ts filterFindings); every field optional. */
@@ -133,6 +172,8 @@ export class DeviceDatabase extends Dexie {
 	drafts!: EntityTable<DeviceDraft, 'key'>;
 	outbox!: EntityTable<OutboxEntry, 'seq'>;
 	setAside!: EntityTable<SetAsideRow, 'seq'>;
+	meta!: EntityTable<MetaRow, 'key'>;
+	conflicts!: EntityTable<DeviceConflict, 'mutationId'>;
 
 	constructor(name: string) {
 		super(name);
@@ -155,6 +196,15 @@ export class DeviceDatabase extends Dexie {
 				setAside: '++seq, store'
 			})
 			.upgrade(upgradeToV2);
+		// Version 3: sync. [recordId+seq] gives a finding's queued entries in order, which the
+		// drain reads after each answer; every other store is kept as it was.
+		this.version(3)
+			.stores({
+				outbox: '++seq, &mutationId, recordId, [recordId+seq]',
+				meta: 'key',
+				conflicts: 'mutationId, recordId, surveyId'
+			})
+			.upgrade(upgradeToV3);
 	}
 }
 

@@ -38,7 +38,8 @@ function outboxEntry(
 	recordId: string,
 	baseVersion: number,
 	payload: FindingCapture | null,
-	now: string
+	now: string,
+	surveyId: string
 ): OutboxEntry {
 	return {
 		mutationId: crypto.randomUUID(),
@@ -47,6 +48,8 @@ function outboxEntry(
 		recordId,
 		baseVersion,
 		payload,
+		// A delete has no payload, yet its push names the survey (docs/sync.md).
+		surveyId,
 		attempts: 0,
 		createdAt: now
 	};
@@ -81,7 +84,7 @@ export async function saveFinding(db: DeviceDatabase, capture: unknown): Promise
 			updatedAt: now
 		};
 		await db.findings.put(finding);
-		await db.outbox.add(outboxEntry('upsert', data.id, finding.version, data, now));
+		await db.outbox.add(outboxEntry('upsert', data.id, finding.version, data, now, data.surveyId));
 		if (data.kind === 'trap' && data.assetTag !== undefined) await rememberTrap(db, data);
 		return finding;
 	});
@@ -152,7 +155,7 @@ export async function deleteFinding(db: DeviceDatabase, id: string): Promise<Del
 			return 'removed';
 		}
 		await db.findings.put({ ...stored, deleted: 1, pending: 1, updatedAt: now });
-		await db.outbox.add(outboxEntry('delete', id, stored.version, null, now));
+		await db.outbox.add(outboxEntry('delete', id, stored.version, null, now, stored.surveyId));
 		await db.drafts
 			.where('surveyId')
 			.equals(stored.surveyId)
