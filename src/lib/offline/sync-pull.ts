@@ -76,11 +76,8 @@ async function applyFinding(db: DeviceDatabase, change: Extract<Change, { entity
 	if (change.deleted || change.data === null) {
 		if (!local) return;
 		await db.findings.delete(change.id);
-		await db.photos
-			.where('findingId')
-			.equals(change.id)
-			.filter((p) => p.uploaded === 1)
-			.delete();
+		// The finding is gone for good: its photos too, sent or not.
+		await db.photos.where('findingId').equals(change.id).delete();
 		return;
 	}
 	const capture = change.data.capture;

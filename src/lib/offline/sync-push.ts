@@ -174,11 +174,8 @@ async function applyAnswers(
 			if (!finding) continue;
 			if (later.length === 0 && finding.deleted === 1 && entry.op === 'delete') {
 				await db.findings.delete(finding.id);
-				await db.photos
-					.where('findingId')
-					.equals(finding.id)
-					.filter((p) => p.uploaded === 1)
-					.delete();
+				// The finding is gone for good: its photos too, sent or not.
+				await db.photos.where('findingId').equals(finding.id).delete();
 				continue;
 			}
 			await db.findings.put({
