@@ -67,6 +67,21 @@ describe('sniffPhoto', () => {
 		expect(sniffPhoto(new Uint8Array(sly))).toBeNull();
 	});
 
+	it('reads a JPEG whose compressed data happens to hold the bytes of a zip header', () => {
+		// Splice "PK\x03\x04" into the entropy-coded data, just before the EOI marker: a real
+		// photo's random bytes may hold them; they are image data, not an archive.
+		const body = jpeg.subarray(0, jpeg.length - 2);
+		const spliced = Buffer.concat([body, Buffer.from([0x50, 0x4b, 0x03, 0x04]), jpeg.subarray(-2)]);
+		expect(sniffPhoto(new Uint8Array(spliced))).toBe('image/jpeg');
+	});
+
+	it('refuses a JPEG with a zip hidden in a comment segment', () => {
+		const zip = Buffer.from([0x50, 0x4b, 0x03, 0x04, 1, 2, 3, 4]);
+		const com = Buffer.concat([Buffer.from([0xff, 0xfe, 0x00, zip.length + 2]), zip]);
+		const hidden = Buffer.concat([jpeg.subarray(0, 2), com, jpeg.subarray(2)]);
+		expect(sniffPhoto(new Uint8Array(hidden))).toBeNull();
+	});
+
 	it('refuses a PNG with trailing data, a truncated JPEG and a WebP of the wrong size', () => {
 		const p = png1x1();
 		expect(sniffPhoto(new Uint8Array([...p, 0]))).toBeNull();

@@ -11,18 +11,51 @@ function ascii(b: Uint8Array, at: number, len: number): string {
 	return String.fromCharCode(...b.subarray(at, at + len));
 }
 
+const hasZipHeader = (b: Uint8Array, from: number, to: number) => {
+	for (let i = from; i + 3 < to; i++) {
+		if (b[i] === 0x50 && b[i + 1] === 0x4b && b[i + 2] === 0x03 && b[i + 3] === 0x04) return true;
+	}
+	return false;
+};
+
+/**
+ * A JPEG walked segment by segment from SOI to its first EOI, which must be the last two
+ * bytes: anything appended (a zip, a script) is refused, and so is an archive hidden in a
+ * metadata segment. Entropy-coded data is skipped by its byte stuffing, so the random bytes of
+ * a real photo can never look like an archive.
+ */
 function isJpeg(b: Uint8Array): boolean {
-	// Starts with SOI + a marker, ends with EOI and nothing after it.
-	if (b.length < 4 || b[0] !== 0xff || b[1] !== 0xd8 || b[2] !== 0xff) return false;
-	if (b[b.length - 2] !== 0xff || b[b.length - 1] !== 0xd9) return false;
-	// A zip appended after an EOI and ending in its own bytes would not end in FFD9; a file
-	// that does (zip inside, EOI repeated at the end) still carries a zip's local header.
-	for (let i = 2; i + 3 < b.length; i++) {
-		if (b[i] === 0x50 && b[i + 1] === 0x4b && b[i + 2] === 0x03 && b[i + 3] === 0x04) {
-			return false;
+	if (b.length < 4 || b[0] !== 0xff || b[1] !== 0xd8) return false;
+	let at = 2;
+	let sawScan = false;
+	while (at + 1 < b.length) {
+		if (b[at] !== 0xff) return false;
+		const marker = b[at + 1];
+		if (marker === 0xff) {
+			at++; // fill byte
+			continue;
+		}
+		if (marker === 0xd9) return sawScan && at + 2 === b.length;
+		if (marker >= 0xd0 && marker <= 0xd7) {
+			at += 2;
+			continue;
+		}
+		if (at + 3 >= b.length) return false;
+		const len = (b[at + 2] << 8) | b[at + 3];
+		if (len < 2 || at + 2 + len > b.length) return false;
+		const isMeta = (marker >= 0xe0 && marker <= 0xef) || marker === 0xfe;
+		if (isMeta && hasZipHeader(b, at + 4, at + 2 + len)) return false;
+		at += 2 + len;
+		if (marker === 0xda) {
+			sawScan = true;
+			// Entropy-coded data: up to the next marker that is not stuffing or a restart.
+			while (at + 1 < b.length) {
+				if (b[at] === 0xff && b[at + 1] !== 0x00 && (b[at + 1] < 0xd0 || b[at + 1] > 0xd7)) break;
+				at++;
+			}
 		}
 	}
-	return true;
+	return false;
 }
 
 function isPng(b: Uint8Array): boolean {

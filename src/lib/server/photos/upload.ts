@@ -1,0 +1,128 @@
+/**
+ * Storing one uploaded photo (docs/sync.md, `PUT /api/photos/[id]`) once its bytes are read:
+ * the hash checked, the type read from the bytes, then idempotent by id — the same bytes again
+ * answer 200, other bytes 409. The row is inserted first inside a transaction and the bytes
+ * written before it commits: a concurrent upload of the same id waits on that row and never
+ * overwrites the stored bytes; a failed write leaves no row.
+ */
+import { createHash } from 'node:crypto';
+import { error } from '@sveltejs/kit';
+import { and, eq } from 'drizzle-orm';
+import { auditLog, findings, photos } from '../db/schema';
+import type { Db } from '../db/types';
+import { photoKey, type PhotoStore } from '../storage';
+import { nextChangeSeq } from '../sync/counter';
+import { dimensions } from './dimensions';
+import { sniffPhoto } from './sniff';
+
+export interface PhotoUpload {
+	id: string;
+	findingId: string;
+	surveyId: string;
+	firmId: string;
+	sha256: string;
+	bytes: Uint8Array;
+}
+
+export interface PhotoAnswer {
+	status: 200 | 201;
+	body: { id: string; sha256: string; bytes: number; contentType: string };
+}
+
+type PhotoRow = typeof photos.$inferSelect;
+
+function again(row: PhotoRow, upload: PhotoUpload): PhotoAnswer {
+	if (row.firmId !== upload.firmId) error(404, 'Not found.');
+	if (row.sha256 !== upload.sha256) {
+		error(409, 'Another photo is already stored under this id; it was kept and this one was not');
+	}
+	return {
+		status: 200,
+		body: { id: row.id, sha256: row.sha256, bytes: row.bytes, contentType: row.contentType }
+	};
+}
+
+const byId = async (db: Db, id: string) =>
+	(await db.select().from(photos).where(eq(photos.id, id)).limit(1))[0];
+
+export async function storePhoto(
+	db: Db,
+	store: PhotoStore,
+	user: Pick<SessionUser, 'id'>,
+	upload: PhotoUpload
+): Promise<PhotoAnswer> {
+	const actual = createHash('sha256').update(upload.bytes).digest('hex');
+	if (actual !== upload.sha256) {
+		error(422, 'The photo’s bytes do not match the SHA-256 sent with it; nothing was stored');
+	}
+	const type = sniffPhoto(upload.bytes);
+	if (!type) {
+		error(415, 'Only whole JPEG, PNG or WebP photos are stored; this file is something else');
+	}
+	const known = await byId(db, upload.id);
+	if (known) return again(known, upload);
+	const [finding] = await db
+		.select({ surveyId: findings.surveyId })
+		.from(findings)
+		.where(eq(findings.id, upload.findingId))
+		.limit(1);
+	if (finding && finding.surveyId !== upload.surveyId) {
+		error(409, 'This photo names a finding of another survey; nothing was stored');
+	}
+	const key = photoKey(upload.id);
+	const size = dimensions(upload.bytes, type);
+	try {
+		await db.transaction(async (tx) => {
+			const changeSeq = await nextChangeSeq(tx, upload.firmId);
+			await tx.insert(photos).values({
+				id: upload.id,
+				findingId: upload.findingId,
+				surveyId: upload.surveyId,
+				firmId: upload.firmId,
+				storageKey: key,
+				contentType: type,
+				bytes: upload.bytes.byteLength,
+				width: size?.width ?? null,
+				height: size?.height ?? null,
+				sha256: actual,
+				uploadedBy: user.id,
+				changeSeq
+			});
+			await tx.insert(auditLog).values({
+				firmId: upload.firmId,
+				actorId: user.id,
+				entity: 'photo',
+				entityId: upload.id,
+				action: 'upload',
+				after: { findingId: upload.findingId, surveyId: upload.surveyId, sha256: actual, type }
+			});
+			await store.put(key, upload.bytes, type);
+		});
+	} catch (e) {
+		// The same id inserted by a concurrent upload that committed first.
+		if (
+			(e as { cause?: { errno?: number } }).cause?.errno === 1062 ||
+			(e as { errno?: number }).errno === 1062
+		) {
+			const row = await byId(db, upload.id);
+			if (row) return again(row, upload);
+		}
+		throw e;
+	}
+	return {
+		status: 201,
+		body: { id: upload.id, sha256: actual, bytes: upload.bytes.byteLength, contentType: type }
+	};
+}
+
+/** A stored photo's row, for `GET`: within the person's firm, its finding not deleted. */
+export async function photoForReading(db: Db, firmId: string, id: string) {
+	const [row] = await db
+		.select({ photo: photos, deletedAt: findings.deletedAt })
+		.from(photos)
+		.leftJoin(findings, eq(findings.id, photos.findingId))
+		.where(and(eq(photos.id, id), eq(photos.firmId, firmId)))
+		.limit(1);
+	if (!row || row.deletedAt || row.photo.deletedAt) return null;
+	return row.photo;
+}
