@@ -194,6 +194,19 @@ export const matrix: Record<string, Record<string, Case>> = {
 		}
 	},
 
+	// Photos: a PUT without the photo headers is a 400 for those who may record; reading an id
+	// that is no photo of theirs is a 404. Tenancy of real photos: tests/integration/photos.spec.ts.
+	'/api/photos/[id]': {
+		PUT: {
+			request: () => ({ path: '/api/photos/5e7a0099-0000-4000-8000-000000000001' }),
+			expect: { anonymous: 401, admin: 400, consultant: 400, auditor: 400, client: 403 }
+		},
+		GET: {
+			request: () => ({ path: '/api/photos/5e7a0099-0000-4000-8000-000000000001' }),
+			expect: signedIn(404, 401)
+		}
+	},
+
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }
 	}
