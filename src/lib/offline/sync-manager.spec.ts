@@ -1,0 +1,183 @@
+import 'fake-indexeddb/auto';
+import Dexie from 'dexie';
+import { afterEach, describe, expect, it } from 'vitest';
+import { DeviceDatabase } from './db';
+import { saveFinding } from './findings';
+import { retryDelay, LAST_RETRY_MS } from './sync-backoff';
+import { createSyncManager } from './sync-manager.svelte';
+import { describeSync, initialSyncState } from './sync-state';
+import { SITE_ID, SURVEY_ID, testDb, trapCapture } from './spec-fixtures';
+
+const dbs: Dexie[] = [];
+afterEach(async () => {
+	for (const d of dbs.splice(0)) await d.delete();
+});
+const fresh = () => {
+	const d = testDb();
+	dbs.push(d);
+	return d;
+};
+
+/** Timers run by hand: the test decides when a scheduled try happens. */
+function manualTimers() {
+	const pending = new Map<number, { run: () => void; ms: number }>();
+	let next = 1;
+	return {
+		pending,
+		setTimeout: (run: () => void, ms: number) => {
+			pending.set(next, { run, ms });
+			return next++;
+		},
+		clearTimeout: (h: unknown) => pending.delete(h as number),
+		retries: () => [...pending.values()].filter((p) => p.ms !== 60_000)
+	};
+}
+
+const emptyPull = () => Response.json({ changes: [], cursor: 0, more: false });
+
+describe('back-off', () => {
+	it('doubles from 1 s, with half of each step random, and stops growing at 5 min', () => {
+		expect(retryDelay(1, 0)).toBe(500);
+		expect(retryDelay(1, 0.999)).toBeLessThanOrEqual(1000);
+		expect(retryDelay(2, 0)).toBe(1000);
+		expect(retryDelay(3, 0.5)).toBe(3000);
+		expect(retryDelay(20, 0)).toBe(LAST_RETRY_MS / 2);
+		expect(retryDelay(20, 0.999)).toBeLessThanOrEqual(LAST_RETRY_MS);
+	});
+});
+
+describe('sync manager', () => {
+	it('backs off after network trouble, longer each time, and Send now starts again at once', async () => {
+		const db = fresh();
+		const timers = manualTimers();
+		let calls = 0;
+		const m = createSyncManager({
+			db,
+			fetch: async () => {
+				calls++;
+				throw new TypeError('no signal');
+			},
+			random: () => 0,
+			now: () => new Date('2026-11-20T10:00:00Z'),
+			...timers
+		});
+		await m.run();
+		expect(m.state.phase).toBe('offline');
+		expect(m.state.problem).toMatch(/could not be reached/);
+		expect(timers.retries().map((t) => t.ms)).toEqual([500]);
+		expect(m.state.nextTryAt).toBe('2026-11-20T10:00:00.500Z');
+		const [first] = timers.retries();
+		timers.pending.clear();
+		first.run();
+		await m.run();
+		// The scheduled try plus the follow-up it asked for: two more failures, longer waits.
+		expect(timers.retries().at(-1)!.ms).toBeGreaterThan(500);
+		const before = calls;
+		timers.pending.clear();
+		await m.sendNow();
+		expect(calls).toBe(before + 1);
+		expect(timers.retries().map((t) => t.ms)).toEqual([500]);
+	});
+
+	it('runs one exchange at a time: triggers during a run ask for one follow-up', async () => {
+		const db = fresh();
+		let release!: () => void;
+		let calls = 0;
+		const m = createSyncManager({
+			db,
+			fetch: async () => {
+				calls++;
+				if (calls === 1) await new Promise<void>((r) => (release = r));
+				return emptyPull();
+			},
+			...manualTimers()
+		});
+		const a = m.run();
+		const b = m.run();
+		const c = m.sendNow();
+		await new Promise((r) => setTimeout(r, 10));
+		expect(calls).toBe(1);
+		release();
+		await Promise.all([a, b, c]);
+		expect(calls).toBe(2);
+		expect(m.state.phase).toBe('idle');
+		expect(m.state.lastExchangeAt).not.toBeNull();
+	});
+
+	it('a problem a person must solve waits for them: no retry timer', async () => {
+		const db = fresh();
+		const timers = manualTimers();
+		const m = createSyncManager({
+			db,
+			fetch: async () => new Response('{"message":"Sign in"}', { status: 401 }),
+			...timers
+		});
+		await m.run();
+		expect(m.state.phase).toBe('needs-attention');
+		expect(m.state.problem).toMatch(/Signed out/);
+		expect(timers.retries()).toEqual([]);
+	});
+
+	it('starts at once, counts what waits, and runs again when the browser comes online', async () => {
+		const db = fresh();
+		await db.surveys.put({ id: SURVEY_ID, siteId: SITE_ID, cursor: 0 } as never);
+		await saveFinding(db, trapCapture());
+		const listeners = new Map<string, () => void>();
+		let calls = 0;
+		const m = createSyncManager({
+			db,
+			fetch: async () => {
+				calls++;
+				throw new TypeError('no signal');
+			},
+			random: () => 0,
+			window: {
+				addEventListener: (type: string, fn: () => void) => listeners.set(type, fn),
+				removeEventListener: (type: string) => listeners.delete(type)
+			} as never,
+			...manualTimers()
+		});
+		m.start();
+		await m.run();
+		await new Promise((r) => setTimeout(r, 20));
+		expect(m.state.findingsWaiting).toBe(1);
+		const before = calls;
+		listeners.get('online')!();
+		await m.run();
+		expect(calls).toBeGreaterThan(before);
+		m.stop();
+		expect(listeners.size).toBe(0);
+	});
+});
+
+describe('describeSync', () => {
+	const now = new Date('2026-11-20T10:45:00');
+	it('says all sent, and when', () => {
+		const w = describeSync(
+			{ ...initialSyncState(), lastExchangeAt: new Date('2026-11-20T10:42:00').toISOString() },
+			now
+		);
+		expect(w.headline).toBe('All sent');
+		expect(w.details).toContain('Last exchange with the server: 10:42.');
+	});
+	it('says what waits, and what needs attention, in words', () => {
+		const w = describeSync(
+			{
+				...initialSyncState(),
+				phase: 'waiting-to-retry',
+				findingsWaiting: 3,
+				photosWaiting: 1,
+				conflicts: 1,
+				refused: 2,
+				problem: 'The server had trouble (503); changes stay on this device and go later',
+				nextTryAt: new Date('2026-11-20T10:46:00').toISOString()
+			},
+			now
+		);
+		expect(w.headline).toBe('3 findings and 1 photo waiting to send');
+		expect(w.details.join(' ')).toMatch(/1 edit clashed .* kept/);
+		expect(w.details.join(' ')).toMatch(/2 changes refused/);
+		expect(w.details).toContain('Trying again at 10:46.');
+		expect(w.details).toContain('Nothing exchanged with the server from this device yet.');
+	});
+});
