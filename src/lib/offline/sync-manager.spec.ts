@@ -1,7 +1,6 @@
 import 'fake-indexeddb/auto';
 import Dexie from 'dexie';
 import { afterEach, describe, expect, it } from 'vitest';
-import { DeviceDatabase } from './db';
 import { saveFinding } from './findings';
 import { retryDelay, LAST_RETRY_MS } from './sync-backoff';
 import { createSyncManager } from './sync-manager.svelte';
