@@ -30,6 +30,8 @@ export const pwaOptions: SvelteKitPWAOptions = {
 		navigateFallback: '/walk',
 		navigateFallbackAllowlist: [/^\/walk(\/|$)/],
 		cleanupOutdatedCaches: true,
+		// Background Sync: the worker wakes open Walk pages to send (static/sw-sync.js).
+		importScripts: ['/sw-sync.js'],
 		clientsClaim: true,
 		skipWaiting: true,
 		runtimeCaching: [

@@ -1,12 +1,16 @@
 import { expect, test, type Locator, type Page } from '@playwright/test';
+import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { demoPassword, demoSurveys, demoUsers } from '../../src/lib/server/seed/demo';
 import { evaluateFinding } from '../../src/lib/steam/losses/evaluate';
+import { openTestDb, rows as query } from './support/db';
 import { signInHere, waitForActiveWorker } from './support/worker';
 
 /**
  * The auditor's round as they would do it: take the demo survey offline, cut the network,
- * reload, record one finding of each kind with a photo, close the page and open it again.
+ * reload, record one finding of each kind with a photo, close the page and open it again; then
+ * the signal returns and everything reaches the server (checked in MariaDB), priced by the server
+ * exactly as the device estimated it.
  */
 const survey = demoSurveys[0];
 const auditor = demoUsers.find((u) => u.email === 'auditor@cinderbrook.example')!;
@@ -41,7 +45,9 @@ async function deviceRows(page: Page) {
 			).map(async (p) => {
 				const head = new Uint8Array(await p.blob.slice(0, 4096).arrayBuffer());
 				const text = String.fromCharCode(...head);
+				const digest = await crypto.subtle.digest('SHA-256', await p.blob.arrayBuffer());
 				return {
+					sha256: [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join(''),
 					id: p.id,
 					findingId: p.findingId,
 					bytes: p.blob.size,
@@ -54,7 +60,7 @@ async function deviceRows(page: Page) {
 		);
 		db.close();
 		return { findings, sites, photos: photoFacts, outbox } as {
-			findings: { id: string; kind: string; pending: number; capture: never }[];
+			findings: { id: string; kind: string; pending: number; version: number; capture: never }[];
 			sites: { costBasis: never; headers: never }[];
 			photos: typeof photoFacts;
 			outbox: { recordId: string; op: string; payload: unknown }[];
@@ -72,7 +78,7 @@ async function save(page: Page) {
 	await expect(page).toHaveURL(round);
 }
 
-test('a whole round offline: one finding of each kind with a photo, kept through a closed page', async ({
+test('a whole round offline, kept through a closed page, then sent when the signal returns', async ({
 	page,
 	context
 }) => {
@@ -197,7 +203,11 @@ test('a whole round offline: one finding of each kind with a photo, kept through
 	await again.getByRole('button', { name: 'Yes, delete it' }).click();
 	await expect(again).toHaveURL(round);
 	const after = await deviceRows(again);
-	expect(after.findings.some((f) => f.id === header.id)).toBe(false);
+	// Gone from the round: removed outright, or (when a send was already tried) marked deleted
+	// with its deletion queued, since an unanswered try may still have reached the server.
+	const gone = after.findings.find((f) => f.id === header.id) as { deleted?: number } | undefined;
+	expect(gone === undefined || gone.deleted === 1).toBe(true);
+	await expect(again.locator(`a[href$="${header.id}"]`)).toHaveCount(0);
 	expect(after.photos.filter((p) => p.findingId === leak.id)).toHaveLength(0);
 	const leakRow = after.findings.find((f) => f.id === leak.id) as unknown as {
 		capture: { photoIds: string[] };
@@ -209,5 +219,68 @@ test('a whole round offline: one finding of each kind with a photo, kept through
 	await expect(again.getByTestId('unsent-warning')).toContainText('not reached the server');
 	await again.getByRole('button', { name: 'Stay signed in' }).click();
 	await expect(again.getByTestId('unsent-warning')).toHaveCount(0);
+
+	// The signal returns: everything goes, and the device says so.
 	await context.setOffline(false);
+	await again.goto('/walk');
+	const status = again.getByTestId('sync-status');
+	await status.getByRole('button', { name: 'Send now' }).click();
+	await expect(status.getByTestId('sync-words')).toHaveText('All sent', { timeout: 30_000 });
+	await expect(again.getByTestId('sync-headline')).toHaveText('All sent');
+	await expect(status).toContainText('Last exchange with the server:');
+	const sent = await deviceRows(again);
+	expect(sent.outbox).toEqual([]);
+	expect(sent.findings.filter((f) => f.pending === 1)).toEqual([]);
+
+	// In MariaDB: the four findings kept (the header reading deleted on the device is not there),
+	// each priced by the server as the device estimated it, and the three photos byte for byte.
+	const db = openTestDb();
+	try {
+		const kept = mine.filter((f) => f.id !== header.id);
+		const server = await query<{ id: string; version: number; results: string | object }>(
+			db,
+			'SELECT id, version, results FROM findings WHERE id IN (?) AND deleted_at IS NULL',
+			[kept.map((f) => f.id)]
+		);
+		expect(server.map((r) => r.id).sort()).toEqual(kept.map((f) => f.id).sort());
+		expect(
+			await query(db, 'SELECT id FROM findings WHERE id = ? AND deleted_at IS NULL', [header.id])
+		).toEqual([]);
+		for (const f of kept) {
+			const row = server.find((r) => r.id === f.id)!;
+			const results = (typeof row.results === 'string' ? JSON.parse(row.results) : row.results) as {
+				heatLoss: number;
+				steamLoss: number | null;
+				cost: { amount: number };
+			};
+			const device = sent.findings.find((d) => d.id === f.id)!;
+			const engine = evaluateFinding(device.capture, {
+				costBasis: site.costBasis,
+				headers: site.headers
+			});
+			expect(results.heatLoss).toBeCloseTo(engine.heatLoss, 9);
+			expect(results.cost.amount).toBeCloseTo(engine.cost.amount, 6);
+			if (engine.steamLoss !== null) expect(results.steamLoss).toBeCloseTo(engine.steamLoss, 9);
+			expect(device.version).toBe(row.version);
+		}
+		const stored = await query<{ id: string; sha256: string; bytes: number }>(
+			db,
+			'SELECT id, sha256, bytes FROM photos WHERE finding_id IN (?)',
+			[kept.map((f) => f.id)]
+		);
+		expect(stored.map((p) => p.id).sort()).toEqual(sent.photos.map((p) => p.id).sort());
+		for (const p of sent.photos) {
+			const row = stored.find((r) => r.id === p.id)!;
+			expect(row.sha256).toBe(p.sha256);
+			const back = await again.request.get(`/api/photos/${p.id}`);
+			expect(back.status()).toBe(200);
+			expect(
+				createHash('sha256')
+					.update(await back.body())
+					.digest('hex')
+			).toBe(p.sha256);
+		}
+	} finally {
+		await db.end();
+	}
 });

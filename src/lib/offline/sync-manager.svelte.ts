@@ -55,7 +55,13 @@ export class SyncManager {
 		this.started = true;
 		this.stopped = false;
 		const { db } = this.o;
-		const counts = liveQuery(() => syncCounts(db)).subscribe((c) => Object.assign(this.state, c));
+		const counts = liveQuery(() => syncCounts(db)).subscribe((c) => {
+			const more = c.findingsWaiting + c.photosWaiting;
+			const before = this.state.findingsWaiting + this.state.photosWaiting;
+			Object.assign(this.state, c);
+			// Something new to send while all was quiet: send it now rather than in a minute.
+			if (more > before && this.state.phase === 'idle') void this.run();
+		});
 		this.cleanup.push(() => counts.unsubscribe());
 		const w = this.o.window;
 		if (w) {

@@ -7,6 +7,7 @@
  */
 import { serverFetch } from '$lib/offline/connection.svelte';
 import { openDeviceDb, type DeviceDatabase } from '$lib/offline/db';
+import { createSyncManager, type SyncManager } from '$lib/offline/sync-manager.svelte';
 import { forgetPerson, rememberPerson, rememberedPerson } from '$lib/offline/person';
 import { walkPersonSchema, type WalkPerson } from '$lib/schemas/snapshot';
 
@@ -17,13 +18,27 @@ export type WalkSession =
 	| { phase: 'never-signed-in' }
 	| { phase: 'no-storage'; problem: string };
 
-export const walk = $state<{ session: WalkSession }>({ session: { phase: 'opening' } });
+export const walk = $state<{ session: WalkSession; sync: SyncManager | null }>({
+	session: { phase: 'opening' },
+	sync: null
+});
 
 let opening: Promise<WalkSession> | null = null;
 
 /** Opens the session once per page load; later callers share the same answer. */
 export function openWalk(): Promise<WalkSession> {
-	opening ??= open().then((session) => (walk.session = session));
+	opening ??= open().then((session) => {
+		walk.session = session;
+		// One sync manager per page load, for the person whose database is open.
+		if (session.phase === 'ready') {
+			walk.sync = createSyncManager({
+				db: session.db,
+				fetch: serverFetch as typeof fetch,
+				window
+			});
+		}
+		return session;
+	});
 	return opening;
 }
 
