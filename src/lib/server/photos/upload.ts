@@ -3,7 +3,9 @@
  * the hash checked, the type read from the bytes, then idempotent by id — the same bytes again
  * answer 200, other bytes 409. The row is inserted first inside a transaction and the bytes
  * written before it commits: a concurrent upload of the same id waits on that row and never
- * overwrites the stored bytes; a failed write leaves no row.
+ * overwrites the stored bytes; a failed write leaves no row. (Should the commit itself fail
+ * after the bytes were stored, they stay under their key without a row: never served, and
+ * replaced whole by the retry.)
  */
 import { createHash } from 'node:crypto';
 import { error } from '@sveltejs/kit';
@@ -22,6 +24,8 @@ export interface PhotoUpload {
 	firmId: string;
 	sha256: string;
 	bytes: Uint8Array;
+	/** The caller's address, for the audit log. */
+	address?: string;
 }
 
 export interface PhotoAnswer {
@@ -40,6 +44,20 @@ function again(row: PhotoRow, upload: PhotoUpload): PhotoAnswer {
 		status: 200,
 		body: { id: row.id, sha256: row.sha256, bytes: row.bytes, contentType: row.contentType }
 	};
+}
+
+const isDuplicateKey = (e: unknown) =>
+	(e as { cause?: { errno?: number } }).cause?.errno === 1062 ||
+	(e as { errno?: number }).errno === 1062;
+
+/** Bytes into storage; a store that cannot take them is a 503 the device retries later. */
+async function putBytes(store: PhotoStore, key: string, bytes: Uint8Array, type: string) {
+	try {
+		await store.put(key, bytes, type);
+	} catch (e) {
+		console.error(`Photo storage (${store.kind}) refused ${key}:`, e);
+		error(503, 'The photo could not be stored just now; nothing was kept: send it again later');
+	}
 }
 
 const byId = async (db: Db, id: string) =>
@@ -73,7 +91,8 @@ export async function storePhoto(
 	const size = dimensions(upload.bytes, type);
 	try {
 		await db.transaction(async (tx) => {
-			const changeSeq = await nextChangeSeq(tx, upload.firmId);
+			// The row first: its primary key makes a concurrent upload of the same id wait here
+			// until this one commits (then it answers 200 or 409), so it never overwrites the bytes.
 			await tx.insert(photos).values({
 				id: upload.id,
 				findingId: upload.findingId,
@@ -85,25 +104,28 @@ export async function storePhoto(
 				width: size?.width ?? null,
 				height: size?.height ?? null,
 				sha256: actual,
-				uploadedBy: user.id,
-				changeSeq
+				uploadedBy: user.id
 			});
+			// The bytes before the commit: a row is never seen without its bytes, and bytes that
+			// fail to store roll the row back.
+			await putBytes(store, key, upload.bytes, type);
+			// The firm's counter last: its lock is held to the commit, and pushes of the firm wait
+			// on it, so it is not taken while the bytes travel to storage.
+			const changeSeq = await nextChangeSeq(tx, upload.firmId);
+			await tx.update(photos).set({ changeSeq }).where(eq(photos.id, upload.id));
 			await tx.insert(auditLog).values({
 				firmId: upload.firmId,
 				actorId: user.id,
 				entity: 'photo',
 				entityId: upload.id,
 				action: 'upload',
-				after: { findingId: upload.findingId, surveyId: upload.surveyId, sha256: actual, type }
+				after: { findingId: upload.findingId, surveyId: upload.surveyId, sha256: actual, type },
+				address: upload.address ?? null
 			});
-			await store.put(key, upload.bytes, type);
 		});
 	} catch (e) {
 		// The same id inserted by a concurrent upload that committed first.
-		if (
-			(e as { cause?: { errno?: number } }).cause?.errno === 1062 ||
-			(e as { errno?: number }).errno === 1062
-		) {
+		if (isDuplicateKey(e)) {
 			const row = await byId(db, upload.id);
 			if (row) return again(row, upload);
 		}
