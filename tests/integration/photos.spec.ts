@@ -8,10 +8,12 @@ import { mkdtempSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { count, eq, inArray } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { PHOTO_HEADERS, MAX_PHOTO_BYTES } from '../../src/lib/schemas/sync';
 import * as schema from '../../src/lib/server/db/schema';
+import { storePhoto } from '../../src/lib/server/photos/upload';
 import { publishedSurveyId } from '../../src/lib/server/seed/findings';
+import type { PhotoStore } from '../../src/lib/server/storage';
 import { appFetch } from './chaos/app-fetch';
 import { testDatabase } from './db';
 import { auditorA, auditorB, clientA, clientB, consultantA } from './demo-people';
@@ -107,6 +109,10 @@ describe('a photo is stored once and whole', () => {
 			height: 1800
 		});
 		expect(row.changeSeq).toBeGreaterThan(0);
+		const audit = await db.select().from(schema.auditLog).where(eq(schema.auditLog.entityId, id));
+		expect(audit).toMatchObject([
+			{ entity: 'photo', action: 'upload', actorId: auditorA.id, firmId: auditorA.firmId }
+		]);
 		// Before its finding is pushed the photo is kept and readable by the survey's people.
 		const back = await get(consultantA, id);
 		expect(back.status).toBe(200);
@@ -161,6 +167,19 @@ describe('a photo is stored once and whole', () => {
 		expect((await get(auditorA, pid)).status).toBe(404);
 	});
 
+	it('a photo sent before its finding stays readable once the finding arrives', async () => {
+		const c = trapCapture('PHOTO-SPEC-3');
+		findingsMade.push(c.id);
+		const pid = randomUUID();
+		expect((await put(auditorA, pid, JPEG, { finding: c.id })).status).toBe(201);
+		const [before] = await db.select().from(schema.findings).where(eq(schema.findings.id, c.id));
+		expect(before).toBeUndefined();
+		expect((await postPush(auditorA, batch(upsert(c, 0)))).status).toBe(200);
+		const back = await get(auditorA, pid);
+		expect(back.status).toBe(200);
+		expect(sha(new Uint8Array(await back.arrayBuffer()))).toBe(sha(JPEG));
+	});
+
 	it('a photo naming a finding of another survey is refused', async () => {
 		const c = trapCapture('PHOTO-SPEC-2');
 		findingsMade.push(c.id);
@@ -173,6 +192,33 @@ describe('a photo is stored once and whole', () => {
 		const res = await put(consultantA, pid, JPEG, { finding: c.id, survey: other.id });
 		expect(res.status).toBe(409);
 		await nothingStoredFor(pid);
+	});
+});
+
+describe('two uploads of one id at the same time', () => {
+	it('the same bytes: one is stored (201), the other finds it (200), one row', async () => {
+		const id = randomUUID();
+		const finding = randomUUID();
+		const answers = await Promise.all([
+			put(auditorA, id, JPEG, { finding }),
+			put(auditorA, id, JPEG, { finding })
+		]);
+		expect(answers.map((a) => a.status).sort()).toEqual([200, 201]);
+		const rows = await db.select().from(schema.photos).where(eq(schema.photos.id, id));
+		expect(rows).toHaveLength(1);
+	});
+
+	it('other bytes: one is stored, the other refused (409), and the bytes are the row’s', async () => {
+		const id = randomUUID();
+		const finding = randomUUID();
+		const answers = await Promise.all([
+			put(auditorA, id, JPEG, { finding }),
+			put(auditorA, id, png(), { finding })
+		]);
+		expect(answers.map((a) => a.status).sort()).toEqual([201, 409]);
+		const [row] = await db.select().from(schema.photos).where(eq(schema.photos.id, id));
+		const back = await get(auditorA, id);
+		expect(sha(new Uint8Array(await back.arrayBuffer()))).toBe(row.sha256);
 	});
 });
 
@@ -227,11 +273,48 @@ describe('refused, with nothing stored', () => {
 		expect((await put(auditorA, id, JPEG)).status).toBe(201);
 	});
 
-	it('missing or malformed headers (400)', async () => {
+	it('missing or malformed headers, or an id that is no UUID (400, in plain words)', async () => {
 		const id = randomUUID();
-		expect((await put(auditorA, id, JPEG, { sha256: 'ABC' })).status).toBe(400);
-		expect((await put(auditorA, id, JPEG, { finding: 'not-a-uuid' })).status).toBe(400);
+		const upper = await put(auditorA, id, JPEG, { sha256: sha(JPEG).toUpperCase() });
+		expect(upper.status).toBe(400);
+		expect((await upper.json()).message).toMatch(/x-steamwisp-sha256 must be .* hex digits/);
+		const badFinding = await put(auditorA, id, JPEG, { finding: 'not-a-uuid' });
+		expect(badFinding.status).toBe(400);
+		expect((await badFinding.json()).message).toMatch(/x-steamwisp-finding must be a UUID/);
+		const badId = await put(auditorA, 'photo-1', JPEG);
+		expect(badId.status).toBe(400);
+		expect((await badId.json()).message).toMatch(/photo id must be a UUID/);
 		await nothingStoredFor(id);
+	});
+
+	it('storage that fails (503): no row, and the retry is stored', async () => {
+		const id = randomUUID();
+		const failing: PhotoStore = {
+			kind: 'disk',
+			has: async () => false,
+			get: async () => null,
+			delete: async () => undefined,
+			put: async () => {
+				throw new Error('EIO: i/o error');
+			}
+		};
+		const upload = {
+			id,
+			findingId: randomUUID(),
+			surveyId: fieldSurveyId,
+			firmId: auditorA.firmId,
+			sha256: sha(JPEG),
+			bytes: JPEG
+		};
+		made.push(id);
+		const quiet = vi.spyOn(console, 'error').mockImplementation(() => undefined);
+		const refused = await storePhoto(db, failing, auditorA, upload).catch((e: unknown) => e);
+		quiet.mockRestore();
+		expect(refused).toMatchObject({ status: 503 });
+		await nothingStoredFor(id);
+		const audit = await db.select().from(schema.auditLog).where(eq(schema.auditLog.entityId, id));
+		expect(audit).toEqual([]);
+		expect((await put(auditorA, id, JPEG)).status).toBe(201);
 	});
 
 	it('a survey hidden from the person (404) and a client (403)', async () => {
@@ -259,6 +342,18 @@ describe('reading is the survey’s authorization', () => {
 		expect((await put(consultantA, id, JPEG, { survey: publishedSurveyId })).status).toBe(201);
 		expect((await get(clientA, id)).status).toBe(200);
 		expect((await get(clientB, id)).status).toBe(404);
+	});
+
+	it('If-None-Match with a list or the weak form of the tag answers 304', async () => {
+		const id = randomUUID();
+		expect((await put(auditorA, id, JPEG)).status).toBe(201);
+		const tag = `"${sha(JPEG)}"`;
+		expect((await get(auditorA, id, { 'if-none-match': `"other", W/${tag}` })).status).toBe(304);
+		const other = await get(auditorA, id, { 'if-none-match': `"${sha(png())}"` });
+		expect(other.status).toBe(200);
+		expect(other.headers.get('etag')).toBe(tag);
+		expect(other.headers.get('content-length')).toBe(String(JPEG.byteLength));
+		expect(other.headers.get('content-disposition')).toBe('inline');
 	});
 
 	it('an id that is no uuid is simply not found', async () => {
