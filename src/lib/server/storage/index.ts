@@ -21,6 +21,15 @@ export function storeFromEnv(env: Env): PhotoStore {
 		const keyId = env.STEAMWISP_S3_ACCESS_KEY_ID;
 		const secret = env.STEAMWISP_S3_SECRET_ACCESS_KEY;
 		const pathStyle = env.STEAMWISP_S3_FORCE_PATH_STYLE;
+		// Half a key pair would silently fall back to whatever AWS_* credentials the host has.
+		if (!keyId !== !secret) {
+			throw new Error(
+				'Set both STEAMWISP_S3_ACCESS_KEY_ID and STEAMWISP_S3_SECRET_ACCESS_KEY, or neither'
+			);
+		}
+		if (pathStyle !== undefined && pathStyle !== 'true' && pathStyle !== 'false') {
+			throw new Error(`STEAMWISP_S3_FORCE_PATH_STYLE must be true or false, not "${pathStyle}"`);
+		}
 		return new S3Store(bucket, {
 			region: env.STEAMWISP_S3_REGION || 'us-east-1',
 			...(endpoint ? { endpoint } : {}),
