@@ -17,7 +17,10 @@ import { upgradeToV3 } from './upgrade-v3';
 
 /** A survey taken offline: its summary plus where its snapshot was taken. */
 export interface DeviceSurvey extends SurveySummary {
-	/** Server change cursor the snapshot was taken at; sync pulls from here. */
+	/**
+	 * Server change counter this survey is known up to: the snapshot's, then moved on by each
+	 * pull page (sync-pull.ts); the pull starts from the smallest on the device.
+	 */
 	cursor: number;
 	takenAt: string;
 	/**

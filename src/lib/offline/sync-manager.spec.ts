@@ -35,13 +35,16 @@ function manualTimers() {
 const emptyPull = () => Response.json({ changes: [], cursor: 0, more: false });
 
 describe('back-off', () => {
-	it('doubles from 1 s, with half of each step random, and stops growing at 5 min', () => {
-		expect(retryDelay(1, 0)).toBe(500);
-		expect(retryDelay(1, 0.999)).toBeLessThanOrEqual(1000);
-		expect(retryDelay(2, 0)).toBe(1000);
-		expect(retryDelay(3, 0.5)).toBe(3000);
-		expect(retryDelay(20, 0)).toBe(LAST_RETRY_MS / 2);
-		expect(retryDelay(20, 0.999)).toBeLessThanOrEqual(LAST_RETRY_MS);
+	it('waits between 1 s and a step that doubles, never past 5 min', () => {
+		// Full jitter: random 0 gives the floor, random near 1 the whole step.
+		expect(retryDelay(1, 0)).toBe(1000);
+		expect(retryDelay(1, 0.5)).toBe(1500);
+		expect(retryDelay(2, 0.5)).toBe(2500);
+		expect(retryDelay(3, 0.999)).toBeGreaterThan(7900);
+		expect(retryDelay(3, 0.999)).toBeLessThan(8000);
+		expect(retryDelay(9, 0.999)).toBeLessThanOrEqual(LAST_RETRY_MS);
+		expect(retryDelay(40, 0.999)).toBe(retryDelay(9, 0.999));
+		expect(retryDelay(40, 0)).toBe(1000);
 	});
 });
 
@@ -56,26 +59,63 @@ describe('sync manager', () => {
 				calls++;
 				throw new TypeError('no signal');
 			},
-			random: () => 0,
+			random: () => 0.5,
 			now: () => new Date('2026-11-20T10:00:00Z'),
 			...timers
 		});
 		await m.run();
 		expect(m.state.phase).toBe('offline');
 		expect(m.state.problem).toMatch(/could not be reached/);
-		expect(timers.retries().map((t) => t.ms)).toEqual([500]);
-		expect(m.state.nextTryAt).toBe('2026-11-20T10:00:00.500Z');
+		expect(timers.retries().map((t) => t.ms)).toEqual([1500]);
+		expect(m.state.nextTryAt).toBe('2026-11-20T10:00:01.500Z');
 		const [first] = timers.retries();
 		timers.pending.clear();
 		first.run();
 		await m.run();
 		// The scheduled try plus the follow-up it asked for: two more failures, longer waits.
-		expect(timers.retries().at(-1)!.ms).toBeGreaterThan(500);
+		expect(timers.retries().at(-1)!.ms).toBeGreaterThan(1500);
 		const before = calls;
 		timers.pending.clear();
 		await m.sendNow();
 		expect(calls).toBe(before + 1);
-		expect(timers.retries().map((t) => t.ms)).toEqual([500]);
+		expect(timers.retries().map((t) => t.ms)).toEqual([1500]);
+	});
+
+	it('waits longer after each failure up to 5 min, and starts over after a success', async () => {
+		const db = fresh();
+		const timers = manualTimers();
+		let failing = true;
+		const m = createSyncManager({
+			db,
+			fetch: async () => {
+				if (failing) return new Response('{"message":"busy"}', { status: 503 });
+				return emptyPull();
+			},
+			random: () => 0.999,
+			...timers
+		});
+		const waits: number[] = [];
+		for (let i = 0; i < 12; i++) {
+			await m.run();
+			expect(m.state.phase).toBe('waiting-to-retry');
+			waits.push(timers.retries().at(-1)!.ms);
+			timers.pending.clear();
+		}
+		for (let i = 1; i < waits.length; i++) {
+			expect(waits[i]).toBeGreaterThanOrEqual(waits[i - 1]);
+		}
+		expect(waits[1]).toBeGreaterThan(waits[0]);
+		expect(Math.max(...waits)).toBeLessThanOrEqual(LAST_RETRY_MS);
+		expect(waits.at(-1)).toBeGreaterThan(LAST_RETRY_MS * 0.99);
+		expect(m.state.problem).toMatch(/server had trouble \(503\)/);
+
+		failing = false;
+		await m.run();
+		expect(m.state).toMatchObject({ phase: 'idle', problem: null, nextTryAt: null });
+		expect(timers.retries()).toEqual([]);
+		failing = true;
+		await m.run();
+		expect(timers.retries().map((t) => t.ms)).toEqual([waits[0]]);
 	});
 
 	it('runs one exchange at a time: triggers during a run ask for one follow-up', async () => {

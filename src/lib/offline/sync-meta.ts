@@ -21,12 +21,18 @@ export async function deviceId(db: DeviceDatabase): Promise<string> {
 	});
 }
 
-/** Where the pull starts: the kept cursor, else the oldest snapshot on the device, else 0. */
+/**
+ * Where the pull starts. One pull covers all of this person's surveys, so it starts from the
+ * survey pulled least far: each survey's cursor is its snapshot's, moved on by every pull page
+ * (sync-pull.ts). A snapshot stored later at an older cursor thus makes the next pull fetch
+ * what it lacks; what is fetched twice is harmless (same versions, pending findings kept).
+ * With no survey on the device, the kept device cursor, else 0.
+ */
 export async function pullCursor(db: DeviceDatabase): Promise<number> {
 	return db.transaction('r', [db.meta, db.surveys], async () => {
-		const kept = await getMeta<number>(db, 'cursor');
-		if (typeof kept === 'number') return kept;
 		const surveys = await db.surveys.toArray();
-		return surveys.length === 0 ? 0 : Math.min(...surveys.map((s) => s.cursor));
+		if (surveys.length > 0) return Math.min(...surveys.map((s) => s.cursor));
+		const kept = await getMeta<number>(db, 'cursor');
+		return typeof kept === 'number' ? kept : 0;
 	});
 }

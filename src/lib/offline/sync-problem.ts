@@ -31,6 +31,15 @@ export function problemFromStatus(status: number, surveyId?: string): SyncProble
 				': ask the consultant; the changes stay on this device'
 		};
 	}
+	// Too many requests, a timeout and server trouble pass by themselves; any other refusal
+	// answers the same next time, so trying again on a timer would only repeat it.
+	if (status >= 400 && status < 500 && status !== 408 && status !== 429) {
+		return {
+			kind: 'bad-request',
+			retryable: false,
+			message: `The server refused this exchange (${status}); the changes stay on this device`
+		};
+	}
 	return {
 		kind: 'retry',
 		retryable: true,

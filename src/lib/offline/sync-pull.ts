@@ -12,14 +12,16 @@ import { setMeta } from './sync-meta';
 export async function pullChanges(
 	db: DeviceDatabase,
 	fetchFn: typeof fetch,
-	since: number
+	since: number,
+	limit?: number
 ): Promise<{ pulled: number; cursor: number; problem?: SyncProblem }> {
 	let cursor = since;
+	const pageSize = limit === undefined ? '' : `&limit=${limit}`;
 	let pulled = 0;
 	for (;;) {
 		let response: Response;
 		try {
-			response = await fetchFn(`/api/sync/pull?since=${cursor}`);
+			response = await fetchFn(`/api/sync/pull?since=${cursor}${pageSize}`);
 		} catch {
 			return { pulled, cursor, problem: problemFromStatus(0) };
 		}
@@ -37,7 +39,7 @@ export async function pullChanges(
 			};
 		}
 		const page = parsed.data;
-		await applyPage(db, page.changes, page.cursor);
+		await applyPage(db, page.changes, cursor, page.cursor);
 		pulled += page.changes.length;
 		// A page that does not move the cursor would loop for ever.
 		if (!page.more || page.cursor <= cursor) return { pulled, cursor: page.cursor };
@@ -45,7 +47,12 @@ export async function pullChanges(
 	}
 }
 
-async function applyPage(db: DeviceDatabase, changes: Change[], cursor: number): Promise<void> {
+async function applyPage(
+	db: DeviceDatabase,
+	changes: Change[],
+	since: number,
+	cursor: number
+): Promise<void> {
 	await db.transaction(
 		'rw',
 		[db.findings, db.photos, db.surveys, db.outbox, db.drafts, db.meta, db.conflicts],
@@ -55,6 +62,10 @@ async function applyPage(db: DeviceDatabase, changes: Change[], cursor: number):
 				else await applySurvey(db, change);
 			}
 			await setMeta(db, 'cursor', cursor);
+			// Each survey remembers how far it is pulled (pullCursor starts from the smallest).
+			// One whose cursor is below this page's start was stored while the pull ran: it
+			// keeps its own cursor, so the next pull fetches what it missed in between.
+			await db.surveys.filter((s) => s.cursor >= since && s.cursor < cursor).modify({ cursor });
 		}
 	);
 }
@@ -100,8 +111,10 @@ async function applySurvey(db: DeviceDatabase, change: Extract<Change, { entity:
 	const local = await db.surveys.get(change.id);
 	if (!local) return;
 	if (!change.deleted && change.data) {
+		// Given back to this person (assigned again, reopened): no longer withdrawn.
+		const { withdrawn: _, ...kept } = local;
 		await db.surveys.put({
-			...local,
+			...kept,
 			...change.data,
 			cursor: local.cursor,
 			takenAt: local.takenAt

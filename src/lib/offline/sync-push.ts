@@ -127,18 +127,23 @@ async function applyAnswers(
 	tally: PushTally,
 	at: string
 ): Promise<SyncProblem | undefined> {
+	// Checked before anything is written: an answer that does not match is not applied at all.
+	if (results.some((r, i) => r.mutationId !== batch[i].mutationId)) {
+		return { kind: 'retry', retryable: true, message: 'The server answered out of order' };
+	}
 	return db.transaction('rw', [db.outbox, db.findings, db.conflicts, db.photos], async () => {
+		let stop: SyncProblem | undefined;
 		for (let i = 0; i < batch.length; i++) {
 			const entry = batch[i];
 			const result = results[i];
-			if (result.mutationId !== entry.mutationId) {
-				return { kind: 'retry', retryable: true, message: 'The server answered out of order' };
-			}
 			if (result.status === 'rejected') {
+				// Kept with its reason; the drain stops after this batch. The other answers of the
+				// batch are still the server's word (it applied them), so they are taken.
 				const reason = result.reason ?? 'The server refused this change';
 				await db.outbox.update(entry.seq!, { lastError: reason });
 				tally.rejected++;
-				return { kind: 'rejected', retryable: false, message: reason };
+				stop ??= { kind: 'rejected', retryable: false, message: reason };
+				continue;
 			}
 			await db.outbox.delete(entry.seq!);
 			const later = await db.outbox
@@ -184,6 +189,6 @@ async function applyAnswers(
 				pending: later.length === 0 && finding.conflict !== 1 ? 0 : 1
 			});
 		}
-		return undefined;
+		return stop;
 	});
 }

@@ -19,6 +19,8 @@ export interface SyncOptions {
 	now?: () => Date;
 	/** Mutations per push, at most MAX_PUSH_MUTATIONS. */
 	batchSize?: number;
+	/** Changes per pull page (the server's default when absent). */
+	pullLimit?: number;
 }
 
 export interface SyncSummary {
@@ -55,7 +57,7 @@ export async function syncOnce(db: DeviceDatabase, options: SyncOptions): Promis
 		summary.photosSent = photos.sent;
 		problem ??= photos.problem;
 		if (!photos.problem || !photos.problem.retryable) {
-			const pull = await pullChanges(db, options.fetch, summary.cursor);
+			const pull = await pullChanges(db, options.fetch, summary.cursor, options.pullLimit);
 			summary.pulled = pull.pulled;
 			summary.cursor = pull.cursor;
 			problem ??= pull.problem;
