@@ -190,7 +190,8 @@ describe('a photo is stored once and whole', () => {
 			.where(eq(schema.surveys.id, publishedSurveyId));
 		const pid = randomUUID();
 		const res = await put(consultantA, pid, JPEG, { finding: c.id, survey: other.id });
-		expect(res.status).toBe(409);
+		expect(res.status).toBe(422);
+		expect((await res.json()).message).toMatch(/finding of another survey/);
 		await nothingStoredFor(pid);
 	});
 });

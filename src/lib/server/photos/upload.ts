@@ -85,7 +85,8 @@ export async function storePhoto(
 		.where(eq(findings.id, upload.findingId))
 		.limit(1);
 	if (finding && finding.surveyId !== upload.surveyId) {
-		error(409, 'This photo names a finding of another survey; nothing was stored');
+		// 422, not 409: the device reads 409 as "other bytes under this id" and says so.
+		error(422, 'This photo names a finding of another survey; nothing was stored');
 	}
 	const key = photoKey(upload.id);
 	const size = dimensions(upload.bytes, type);
