@@ -72,7 +72,7 @@ export class FakeSyncServer {
 	/** Every mutation id that changed something, in order: each should appear once. */
 	readonly appliedLog: string[] = [];
 	readonly tombstones: { seq: number; entity: 'finding' | 'survey'; id: string }[] = [];
-	/** Every request seen, as "METHOD /path". */
+	/** Every request seen, as "METHOD /path?query". */
 	readonly requests: string[] = [];
 	private readonly faults: { path: string; fault: Fault; skip: number }[] = [];
 	private readonly holds: { path: string; release: Promise<void>; reached: () => void }[] = [];
@@ -106,6 +106,12 @@ export class FakeSyncServer {
 		return row;
 	}
 
+	/** A deletion made on the server: pulled as the finding's tombstone. */
+	remove(findingId: string): void {
+		const row = this.findings.get(findingId)!;
+		Object.assign(row, { deleted: true, version: row.version + 1, seq: ++this.counter });
+	}
+
 	/** A request to `path` meets `fault`: the next one, or the one after `skip` more. */
 	fail(path: string, fault: Fault, skip = 0): void {
 		this.faults.push({ path, fault, skip });
@@ -128,7 +134,7 @@ export class FakeSyncServer {
 	readonly fetch = async (input: RequestInfo | URL, init?: RequestInit): Promise<Response> => {
 		const request = new Request(new URL(String(input), 'http://127.0.0.1'), init);
 		const url = new URL(request.url);
-		this.requests.push(`${request.method} ${url.pathname}`);
+		this.requests.push(`${request.method} ${url.pathname}${url.search}`);
 		const held = this.take(this.holds, url.pathname);
 		if (held) {
 			held.reached();

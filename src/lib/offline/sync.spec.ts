@@ -49,7 +49,7 @@ describe('syncOnce, pushing', () => {
 		expect(again).toMatchObject({ pushed: 0, photosSent: 0, pulled: 0 });
 		expect(srv.counter).toBe(counter);
 		// Nothing to push or upload: one pull only.
-		expect(srv.requests.slice(requests)).toEqual(['GET /api/sync/pull']);
+		expect(srv.requests.slice(requests)).toEqual([`GET /api/sync/pull?since=${counter}`]);
 		expect(await db.findings.get(trap.id)).toMatchObject({ version: 1, pending: 0 });
 	});
 
