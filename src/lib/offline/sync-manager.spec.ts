@@ -134,7 +134,9 @@ describe('sync manager', () => {
 		const a = m.run();
 		const b = m.run();
 		const c = m.sendNow();
-		await new Promise((r) => setTimeout(r, 10));
+		// Wait for the first exchange to reach the network (a busy machine may take a while).
+		for (let i = 0; i < 200 && calls === 0; i++) await new Promise((r) => setTimeout(r, 10));
+		await new Promise((r) => setTimeout(r, 20));
 		expect(calls).toBe(1);
 		release();
 		await Promise.all([a, b, c]);

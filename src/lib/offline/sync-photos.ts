@@ -41,8 +41,7 @@ async function uploadOne(
 	if (response.status === 401) return { sent: false, problem: problemFromStatus(401), stop: true };
 	if (response.status === 409) {
 		// Other bytes under this id on the server: never overwritten; a person must look.
-		const message =
-			'The server holds a different photo under the same name; this one is kept here';
+		const message = 'The server holds a different photo under the same name; this one is kept here';
 		await db.photos.update(photo.id, { lastError: message });
 		return { sent: false, problem: { kind: 'photo', retryable: false, message } };
 	}

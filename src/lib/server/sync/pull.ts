@@ -16,14 +16,27 @@ import { resultsForDevice } from './price';
 type Sequenced = { seq: number; change: Change | (() => Promise<Change>) };
 
 async function findingFeed(tx: Executor, user: SessionUser, since: number, n: number) {
-	const rows = await tx
-		.select({ finding: findings, assetTag: assets.tag })
+	// Two steps: the page's ids from the (survey_id, change_seq) index alone, then the whole rows
+	// of that page only, so a long feed never reads its JSON columns to sort them.
+	const page = await tx
+		.select({ id: findings.id })
 		.from(findings)
 		.innerJoin(surveys, eq(surveys.id, findings.surveyId))
-		.leftJoin(assets, eq(assets.id, findings.assetId))
 		.where(and(surveyScope(user), gt(findings.changeSeq, since)))
 		.orderBy(asc(findings.changeSeq))
 		.limit(n);
+	if (page.length === 0) return [];
+	const rows = await tx
+		.select({ finding: findings, assetTag: assets.tag })
+		.from(findings)
+		.leftJoin(assets, eq(assets.id, findings.assetId))
+		.where(
+			inArray(
+				findings.id,
+				page.map((p) => p.id)
+			)
+		)
+		.orderBy(asc(findings.changeSeq));
 	return rows.map(({ finding: f, assetTag }): Sequenced => {
 		const deleted = f.deletedAt !== null;
 		return {
