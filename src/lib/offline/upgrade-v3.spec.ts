@@ -22,6 +22,19 @@ class V2Database extends Dexie {
 	}
 }
 
+/** The version-1 stores exactly as they shipped. */
+class V1Database extends Dexie {
+	constructor(name: string) {
+		super(name);
+		this.version(1).stores({
+			surveys: 'id, updatedAt',
+			findings: 'id, surveyId, [surveyId+updatedAt]',
+			photos: 'id, findingId, uploaded',
+			outbox: '++seq, &mutationId, entityId'
+		});
+	}
+}
+
 const name = `t-${crypto.randomUUID()}`;
 afterEach(async () => {
 	await Dexie.delete(name);
@@ -92,6 +105,58 @@ describe('device database, version 2 → 3', () => {
 		expect(await db.setAside.count()).toBe(1);
 		expect(await db.meta.count()).toBe(0);
 		expect(await db.conflicts.count()).toBe(0);
+		db.close();
+	});
+});
+
+describe('device database, version 1 → 2 → 3', () => {
+	it('a version-1 database still opens, through version 2, with the sync stores', async () => {
+		const v1 = new V1Database(name);
+		const trap = trapCapture();
+		await v1.table('findings').add({
+			id: trap.id,
+			surveyId: SURVEY_ID,
+			kind: 'trap',
+			record: trap,
+			version: 0,
+			updatedAt: trap.updatedAt
+		});
+		await v1.table('outbox').add({
+			mutationId: 'm1',
+			entity: 'finding',
+			entityId: trap.id,
+			payload: trap,
+			attempts: 1,
+			createdAt: trap.updatedAt
+		});
+		v1.close();
+
+		const db = new DeviceDatabase(name);
+		await db.open();
+		expect(db.verno).toBe(3);
+		expect(await db.findings.get(trap.id)).toMatchObject({ capture: trap, pending: 1 });
+		const [entry] = await db.outbox.toArray();
+		expect(entry).toMatchObject({
+			mutationId: 'm1',
+			recordId: trap.id,
+			op: 'upsert',
+			surveyId: SURVEY_ID,
+			attempts: 1
+		});
+		expect(
+			await db.outbox.where('[recordId+seq]').between([trap.id, 0], [trap.id, Infinity]).count()
+		).toBe(1);
+		await db.meta.put({ key: 'cursor', value: 7 });
+		await db.conflicts.put({
+			mutationId: 'm1',
+			recordId: trap.id,
+			surveyId: SURVEY_ID,
+			capture: trap,
+			serverVersion: 2,
+			reason: 'r',
+			createdAt: trap.updatedAt
+		});
+		expect(await db.conflicts.where('recordId').equals(trap.id).count()).toBe(1);
 		db.close();
 	});
 });
