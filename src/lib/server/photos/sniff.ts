@@ -1,7 +1,8 @@
 /**
  * What a photo's bytes really are. Only whole JPEG, PNG and WebP files pass: anything else
- * (SVG, HTML, GIF, a zip) or an image with bytes after its end (a polyglot) is refused, and
- * the request's own Content-Type is never trusted.
+ * (SVG, HTML, GIF, a zip) or an image with bytes after its end or an archive in its metadata
+ * (a polyglot) is refused, and the request's own Content-Type is never trusted. Each format is
+ * walked by its own structure, so compressed image data (random bytes) is never searched.
  */
 export type PhotoType = 'image/jpeg' | 'image/png' | 'image/webp';
 
@@ -11,9 +12,16 @@ function ascii(b: Uint8Array, at: number, len: number): string {
 	return String.fromCharCode(...b.subarray(at, at + len));
 }
 
+/**
+ * A zip's local file header (PK 03 04) or its end-of-directory record (PK 05 06) between `from`
+ * and `to`: what a zip reader looks for, so a photo carrying one in its metadata is a polyglot.
+ */
 const hasZipHeader = (b: Uint8Array, from: number, to: number) => {
 	for (let i = from; i + 3 < to; i++) {
-		if (b[i] === 0x50 && b[i + 1] === 0x4b && b[i + 2] === 0x03 && b[i + 3] === 0x04) return true;
+		if (b[i] !== 0x50 || b[i + 1] !== 0x4b) continue;
+		if ((b[i + 2] === 0x03 && b[i + 3] === 0x04) || (b[i + 2] === 0x05 && b[i + 3] === 0x06)) {
+			return true;
+		}
 	}
 	return false;
 };
@@ -58,6 +66,10 @@ function isJpeg(b: Uint8Array): boolean {
 	return false;
 }
 
+/** PNG chunks of image data (compressed): their bytes are never read as an archive. */
+const PNG_IMAGE_DATA = new Set(['IDAT', 'fdAT']);
+
+/** A PNG walked chunk by chunk from IHDR to IEND, which must end the file. */
 function isPng(b: Uint8Array): boolean {
 	if (b.length < 8 + 12 + 13 + 12) return false;
 	if (!PNG_SIGNATURE.every((v, i) => b[i] === v)) return false;
@@ -71,16 +83,31 @@ function isPng(b: Uint8Array): boolean {
 		first = false;
 		const next = at + 12 + len;
 		if (next > b.length) return false;
+		if (!PNG_IMAGE_DATA.has(type) && hasZipHeader(b, at + 8, at + 8 + len)) return false;
 		if (type === 'IEND') return next === b.length;
 		at = next;
 	}
 	return false;
 }
 
+/** WebP chunks of image data (VP8, VP8L, alpha, animation frames). */
+const WEBP_IMAGE_DATA = new Set(['VP8 ', 'VP8L', 'ALPH', 'ANMF']);
+
+/** A RIFF/WEBP container whose size is the file's and whose chunks fill it exactly. */
 function isWebp(b: Uint8Array): boolean {
-	if (b.length < 16 || ascii(b, 0, 4) !== 'RIFF' || ascii(b, 8, 4) !== 'WEBP') return false;
-	const size = new DataView(b.buffer, b.byteOffset, b.byteLength).getUint32(4, true);
-	return size === b.length - 8;
+	if (b.length < 20 || ascii(b, 0, 4) !== 'RIFF' || ascii(b, 8, 4) !== 'WEBP') return false;
+	const view = new DataView(b.buffer, b.byteOffset, b.byteLength);
+	if (view.getUint32(4, true) !== b.length - 8) return false;
+	let at = 12;
+	while (at + 8 <= b.length) {
+		const type = ascii(b, at, 4);
+		const len = view.getUint32(at + 4, true);
+		const end = at + 8 + len;
+		if (end > b.length) return false;
+		if (!WEBP_IMAGE_DATA.has(type) && hasZipHeader(b, at + 8, end)) return false;
+		at = end + (len & 1); // chunks are padded to an even length
+	}
+	return at === b.length;
 }
 
 /** The real type of `bytes`, or null when they are not one whole JPEG, PNG or WebP. */
