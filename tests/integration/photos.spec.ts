@@ -7,7 +7,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import { mkdtempSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { count, eq, inArray } from 'drizzle-orm';
+import { count, eq, inArray, like } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { PHOTO_HEADERS, MAX_PHOTO_BYTES } from '../../src/lib/schemas/sync';
 import * as schema from '../../src/lib/server/db/schema';
@@ -83,6 +83,8 @@ afterAll(async () => {
 	if (findingsMade.length > 0) {
 		await db.delete(schema.findings).where(inArray(schema.findings.id, findingsMade));
 	}
+	// The traps its pushes registered: left behind, they would head the demo's traps to test.
+	await db.delete(schema.assets).where(like(schema.assets.tag, 'PHOTO-SPEC-%'));
 	await pool.end();
 });
 
