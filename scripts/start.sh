@@ -27,6 +27,9 @@ fi
 
 export HOST="$APP_HOST" PORT="$APP_PORT"
 export ORIGIN="${ORIGIN:-http://$APP_HOST:$APP_PORT}"
+# adapter-node refuses bodies over 512 KiB by default; a photo may have 8 MiB (MAX_PHOTO_BYTES),
+# and the photo route counts that limit itself, so the adapter's stays just above it.
+export BODY_SIZE_LIMIT="${BODY_SIZE_LIMIT:-9M}"
 npx tsx scripts/seed.ts --print-sign-ins
 
 # E-mail goes to the local SMTP fake (scripts/mail-fake.ts) unless STEAMWISP_SMTP_URL names a real server.
