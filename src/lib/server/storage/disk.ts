@@ -10,6 +10,16 @@ import { dirname, join } from 'node:path';
 import { Readable } from 'node:stream';
 import { assertKey, type PhotoStore, type StoredObject } from './store';
 
+/** The rename itself survives a power cut only once its directory is flushed too (POSIX). */
+async function syncDirectory(path: string): Promise<void> {
+	const dir = await open(path, 'r');
+	try {
+		await dir.sync();
+	} finally {
+		await dir.close();
+	}
+}
+
 export class LocalDiskStore implements PhotoStore {
 	readonly kind = 'disk';
 	constructor(readonly root: string) {}
@@ -42,6 +52,7 @@ export class LocalDiskStore implements PhotoStore {
 		}
 		await file.close();
 		await rename(temp, target);
+		await syncDirectory(dirname(target));
 	}
 
 	async get(key: string): Promise<StoredObject | null> {
