@@ -53,7 +53,7 @@ function sniff(b: Uint8Array): string | null {
 	return null;
 }
 
-async function sha256Hex(bytes: Uint8Array): Promise<string> {
+async function sha256Hex(bytes: Uint8Array<ArrayBuffer>): Promise<string> {
 	const digest = await crypto.subtle.digest('SHA-256', bytes);
 	return [...new Uint8Array(digest)].map((x) => x.toString(16).padStart(2, '0')).join('');
 }

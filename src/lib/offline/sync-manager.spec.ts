@@ -118,6 +118,39 @@ describe('sync manager', () => {
 		expect(timers.retries().map((t) => t.ms)).toEqual([waits[0]]);
 	});
 
+	it('while a back-off wait runs, the minute’s tick does not knock; the wait does', async () => {
+		const db = fresh();
+		const timers = manualTimers();
+		let calls = 0;
+		const wakes: string[] = [];
+		const m = createSyncManager({
+			db,
+			fetch: async () => {
+				calls++;
+				throw new TypeError('no signal');
+			},
+			random: () => 0.5,
+			backgroundSync: async () => {
+				wakes.push('registered');
+			},
+			...timers
+		});
+		m.start();
+		await m.run();
+		const afterStart = calls;
+		// Retryable trouble asks the browser to wake the app when the signal returns.
+		expect(wakes.length).toBeGreaterThan(0);
+		const tick = [...timers.pending.entries()].find(([, t]) => t.ms === 60_000)!;
+		timers.pending.delete(tick[0]);
+		tick[1].run();
+		await m.run().catch(() => {});
+		// Only the explicit m.run() above went out, not the tick.
+		expect(calls).toBe(afterStart + 1);
+		expect([...timers.pending.values()].some((t) => t.ms === 60_000)).toBe(true);
+		m.stop();
+		expect(timers.pending.size).toBe(0);
+	});
+
 	it('runs one exchange at a time: triggers during a run ask for one follow-up', async () => {
 		const db = fresh();
 		let release!: () => void;

@@ -23,6 +23,12 @@ export interface SyncManagerOptions {
 	random?: () => number;
 	setTimeout?: (run: () => void, ms: number) => unknown;
 	clearTimeout?: (handle: unknown) => void;
+	/**
+	 * Asks the browser to wake the app when a connection returns (Background Sync); called
+	 * after each exchange that ends in retryable trouble. Defaults to requestBackgroundSync
+	 * when a window is given.
+	 */
+	backgroundSync?: () => Promise<void>;
 	/** Where the triggers come from (the page's window; absent in tests). */
 	window?: Pick<Window, 'addEventListener' | 'removeEventListener'> & {
 		document?: Pick<Document, 'visibilityState'>;
@@ -77,7 +83,9 @@ export class SyncManager {
 			});
 		}
 		const tick = () => {
-			void this.run();
+			// While a back-off wait runs, the minute's tick leaves it to the wait: otherwise the
+			// back-off would never grow past a minute for a server that is struggling.
+			if (this.timer === null) void this.run();
 			this.interval = this.later(tick, SYNC_INTERVAL_MS);
 		};
 		this.interval = this.later(tick, SYNC_INTERVAL_MS);
@@ -159,6 +167,9 @@ export class SyncManager {
 			problem: problem.message,
 			nextTryAt: at
 		});
+		const wake = this.o.backgroundSync ?? (this.o.window ? requestBackgroundSync : undefined);
+		// Registration is ignored where Background Sync is not offered, and so is its failure.
+		void wake?.().catch(() => {});
 		if (this.stopped) return;
 		if (this.timer !== null) this.cancel(this.timer);
 		this.timer = this.later(() => {
