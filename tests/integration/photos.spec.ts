@@ -258,6 +258,38 @@ describe('refused, with nothing stored', () => {
 		await nothingStoredFor(id);
 	});
 
+	it('a Content-Length over the limit is refused (413) before the body is read', async () => {
+		const id = randomUUID();
+		made.push(id);
+		let pulled = 0;
+		// highWaterMark 0: nothing is pulled until someone reads.
+		const body = new ReadableStream<Uint8Array>(
+			{
+				pull(c) {
+					pulled++;
+					c.enqueue(JPEG);
+					c.close();
+				}
+			},
+			{ highWaterMark: 0 }
+		);
+		const res = await appFetch(auditorA)(`http://127.0.0.1/api/photos/${id}`, {
+			method: 'PUT',
+			headers: {
+				'content-length': String(MAX_PHOTO_BYTES + 1),
+				[PHOTO_HEADERS.finding]: randomUUID(),
+				[PHOTO_HEADERS.survey]: fieldSurveyId,
+				[PHOTO_HEADERS.sha256]: sha(JPEG)
+			},
+			body,
+			duplex: 'half'
+		} as RequestInit);
+		expect(res.status).toBe(413);
+		expect((await res.json()).message).toMatch(/at most 8 MiB/);
+		expect(pulled).toBe(0);
+		await nothingStoredFor(id);
+	});
+
 	it('an upload cut halfway (400), and the retry is stored', async () => {
 		const id = randomUUID();
 		const half = JPEG.subarray(0, JPEG.length >> 1);
