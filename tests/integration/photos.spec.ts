@@ -246,15 +246,24 @@ describe('refused, with nothing stored', () => {
 		const id = randomUUID();
 		const big = new Uint8Array(MAX_PHOTO_BYTES + 1);
 		expect((await put(auditorA, id, big)).status).toBe(413);
+		// A body with no end and no length: the route must stop reading at the limit, not buffer on.
 		let sent = 0;
-		const stream = new ReadableStream<Uint8Array>({
-			pull(c) {
-				if (sent > MAX_PHOTO_BYTES) return c.close();
-				sent += 1 << 20;
-				c.enqueue(new Uint8Array(1 << 20));
-			}
-		});
+		let cancelled = false;
+		const stream = new ReadableStream<Uint8Array>(
+			{
+				pull(c) {
+					sent += 1 << 20;
+					c.enqueue(new Uint8Array(1 << 20));
+				},
+				cancel() {
+					cancelled = true;
+				}
+			},
+			{ highWaterMark: 0 }
+		);
 		expect((await put(auditorA, id, stream, {}, sha(JPEG))).status).toBe(413);
+		expect(cancelled).toBe(true);
+		expect(sent).toBeLessThanOrEqual(MAX_PHOTO_BYTES + (2 << 20));
 		await nothingStoredFor(id);
 	});
 
