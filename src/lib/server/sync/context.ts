@@ -1,3 +1,5 @@
+import type { SiteFacts } from './price';
+
 /** What every mutation of one push shares: who sent it, from which device, onto which surveys. */
 export interface PushSurvey {
 	id: string;
@@ -14,6 +16,8 @@ export interface PushContext {
 	address: string | null;
 	/** Every survey the batch names, already authorized for writing. */
 	surveys: ReadonlyMap<string, PushSurvey>;
+	/** Each site's cost basis, headers and areas, read once per push (price.ts siteFacts). */
+	sites: Map<string, Promise<SiteFacts>>;
 }
 
 /** Stages in which the Walk may still change a survey's findings. */

@@ -5,11 +5,11 @@
  */
 import { eq } from 'drizzle-orm';
 import type { FindingCapture } from '../../schemas/capture';
-import { costBasisSchema } from '../../schemas/site';
+import { costBasisSchema, type CostBasis } from '../../schemas/site';
 import type { ServerResults } from '../../schemas/sync';
-import { evaluateFinding } from '../../steam/index';
+import { evaluateFinding, type Header } from '../../steam/index';
 import { ENGINE_VERSION } from '../../steam/version';
-import { headers, sites } from '../db/schema';
+import { areas, headers, sites } from '../db/schema';
 import type { Executor } from '../db/types';
 
 export interface Priced {
@@ -18,20 +18,21 @@ export interface Priced {
 	engine: string | null;
 }
 
-export async function priceCapture(
-	tx: Executor,
-	siteId: string,
-	capture: FindingCapture,
-	repairCost: number | null
-): Promise<Priced> {
+/** What pricing and placing a capture needs from its site, read once per push. */
+export interface SiteFacts {
+	costBasis: CostBasis | null;
+	/** Every header of the site, retired ones too: a finding keeps the header it was recorded on. */
+	headers: Header[];
+	areaIds: Set<string>;
+}
+
+export async function siteFacts(tx: Executor, siteId: string): Promise<SiteFacts> {
 	const [site] = await tx
 		.select({ costBasis: sites.costBasis })
 		.from(sites)
 		.where(eq(sites.id, siteId))
 		.limit(1);
 	const basis = costBasisSchema.safeParse(site?.costBasis);
-	if (!basis.success) return { results: null, engine: null };
-	// Retired headers too: a finding keeps the header it was recorded on.
 	const siteHeaders = await tx
 		.select({
 			id: headers.id,
@@ -41,37 +42,73 @@ export async function priceCapture(
 		})
 		.from(headers)
 		.where(eq(headers.siteId, siteId));
-	const list = siteHeaders.map((h) => ({
-		id: h.id,
-		name: h.name,
-		pressure: h.pressure,
-		...(h.designTemperature === null ? {} : { designTemperature: h.designTemperature })
-	}));
+	const siteAreas = await tx.select({ id: areas.id }).from(areas).where(eq(areas.siteId, siteId));
+	return {
+		costBasis: basis.success ? basis.data : null,
+		headers: siteHeaders.map((h) => ({
+			id: h.id,
+			name: h.name,
+			pressure: h.pressure,
+			...(h.designTemperature === null ? {} : { designTemperature: h.designTemperature })
+		})),
+		areaIds: new Set(siteAreas.map((a) => a.id))
+	};
+}
+
+/** Why the capture cannot be stored on this site (a header or area of another), or null. */
+export function misplaced(site: SiteFacts, c: FindingCapture): string | null {
+	if (c.headerId && !site.headers.some((h) => h.id === c.headerId)) {
+		return 'The header this finding names is not one of this site’s headers';
+	}
+	if (c.areaId && !site.areaIds.has(c.areaId)) {
+		return 'The area this finding names is not one of this site’s areas';
+	}
+	return null;
+}
+
+/**
+ * The engine run on the capture with the site's cost basis and headers. A site without a
+ * valid cost basis, or a capture the engine refuses, gets no results; the finding is kept.
+ */
+export function priceCapture(
+	site: SiteFacts,
+	capture: FindingCapture,
+	repairCost: number | null
+): Priced {
+	if (!site.costBasis) return { results: null, engine: null };
 	try {
 		const finding = repairCost === null ? capture : { ...capture, repairCost };
-		const evaluation = evaluateFinding(finding, { costBasis: basis.data, headers: list });
+		const evaluation = evaluateFinding(finding, {
+			costBasis: site.costBasis,
+			headers: site.headers
+		});
 		return { results: JSON.parse(JSON.stringify(evaluation)), engine: ENGINE_VERSION };
 	} catch {
 		return { results: null, engine: null };
 	}
 }
 
+/** Stored figures as JSON_VALUE reads them (text, or null when absent). */
+export type StoredFigures = Record<
+	'steamLoss' | 'heatLoss' | 'fuelEnergy' | 'cost' | 'currency' | 'co2' | 'water',
+	string | null
+>;
+
 /** The part of stored results a device is sent back on pull (serverResultsSchema). */
-export function resultsForDevice(
-	results: Record<string, unknown> | null,
-	engine: string | null
-): ServerResults | null {
-	if (!results || !engine) return null;
-	const cost = results.cost as { amount?: unknown; currency?: unknown } | undefined;
-	const num = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : 0);
+export function figuresForDevice(f: StoredFigures, engine: string | null): ServerResults | null {
+	if (!engine || f.heatLoss === null) return null;
+	const num = (v: string | null) => {
+		const n = Number(v);
+		return v !== null && Number.isFinite(n) ? n : 0;
+	};
 	return {
 		engine,
-		steamLoss: typeof results.steamLoss === 'number' ? results.steamLoss : null,
-		heatLoss: num(results.heatLoss),
-		fuelEnergy: num(results.fuelEnergy),
-		cost: num(cost?.amount),
-		currency: typeof cost?.currency === 'string' ? cost.currency : '',
-		co2: num(results.co2),
-		water: num(results.water)
+		steamLoss: f.steamLoss === null || f.steamLoss === 'null' ? null : num(f.steamLoss),
+		heatLoss: num(f.heatLoss),
+		fuelEnergy: num(f.fuelEnergy),
+		cost: num(f.cost),
+		currency: f.currency ?? '',
+		co2: num(f.co2),
+		water: num(f.water)
 	};
 }

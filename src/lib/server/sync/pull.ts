@@ -4,14 +4,51 @@
  * records on, those surveys themselves, and tombstones addressed to the person (or everyone) —
  * so merging them by change_seq gives one total order, and a page ends at a counter value.
  */
-import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm';
+import { and, asc, eq, gt, inArray, isNull, or, sql } from 'drizzle-orm';
 import type { Change, PullResponse } from '../../schemas/sync';
 import { assets, findings, surveys, syncTombstones } from '../db/schema';
 import type { Db, Executor } from '../db/types';
 import { surveyScope } from '../policy';
 import { captureFromRow } from '../walk/capture-row';
 import { surveySummaries } from '../walk/summaries';
-import { resultsForDevice } from './price';
+import { figuresForDevice } from './price';
+
+/** The finding's columns a change carries; its stored results are read field by field below. */
+const feedColumns = {
+	id: findings.id,
+	surveyId: findings.surveyId,
+	kind: findings.kind,
+	headerId: findings.headerId,
+	areaId: findings.areaId,
+	location: findings.location,
+	notes: findings.notes,
+	inputs: findings.inputs,
+	photoIds: findings.photoIds,
+	recordedAt: findings.recordedAt,
+	capturedAt: findings.capturedAt,
+	createdAt: findings.createdAt,
+	updatedAt: findings.updatedAt,
+	status: findings.status,
+	version: findings.version,
+	changeSeq: findings.changeSeq,
+	deletedAt: findings.deletedAt,
+	resultsEngine: findings.resultsEngine
+};
+
+/**
+ * The figures a device is sent, taken out of the stored evaluation in SQL: the evaluation also
+ * holds its assumptions, cautions and notes (kilobytes per finding) that a pull never needs.
+ */
+const figure = (path: string) => sql<string | null>`JSON_VALUE(${findings.results}, ${path})`;
+const feedFigures = {
+	steamLoss: figure('$.steamLoss'),
+	heatLoss: figure('$.heatLoss'),
+	fuelEnergy: figure('$.fuelEnergy'),
+	cost: figure('$.cost.amount'),
+	currency: figure('$.cost.currency'),
+	co2: figure('$.co2'),
+	water: figure('$.water')
+};
 
 type Sequenced = { seq: number; change: Change | (() => Promise<Change>) };
 
@@ -27,7 +64,7 @@ async function findingFeed(tx: Executor, user: SessionUser, since: number, n: nu
 		.limit(n);
 	if (page.length === 0) return [];
 	const rows = await tx
-		.select({ finding: findings, assetTag: assets.tag })
+		.select({ finding: feedColumns, figures: feedFigures, assetTag: assets.tag })
 		.from(findings)
 		.leftJoin(assets, eq(assets.id, findings.assetId))
 		.where(
@@ -37,7 +74,7 @@ async function findingFeed(tx: Executor, user: SessionUser, since: number, n: nu
 			)
 		)
 		.orderBy(asc(findings.changeSeq));
-	return rows.map(({ finding: f, assetTag }): Sequenced => {
+	return rows.map(({ finding: f, figures, assetTag }): Sequenced => {
 		const deleted = f.deletedAt !== null;
 		return {
 			seq: f.changeSeq,
@@ -51,7 +88,7 @@ async function findingFeed(tx: Executor, user: SessionUser, since: number, n: nu
 					: {
 							capture: captureFromRow({ ...f, assetTag }),
 							status: f.status as never,
-							results: resultsForDevice(f.results ?? null, f.resultsEngine)
+							results: figuresForDevice(figures, f.resultsEngine)
 						}
 			}
 		};

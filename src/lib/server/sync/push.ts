@@ -31,10 +31,10 @@ export async function pushSurveys(
 
 export async function applyPush(
 	db: Db,
-	ctx: Omit<PushContext, 'deviceId'>,
+	ctx: Omit<PushContext, 'deviceId' | 'sites'>,
 	request: PushRequest
 ): Promise<PushResponse> {
-	const full: PushContext = { ...ctx, deviceId: request.deviceId };
+	const full: PushContext = { ...ctx, deviceId: request.deviceId, sites: new Map() };
 	const results = [];
 	for (const m of request.mutations) results.push(await applyMutation(db, full, m));
 	return { results };

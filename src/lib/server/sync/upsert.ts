@@ -3,18 +3,17 @@
  * finding at version 1, update one whose version the device had, keep anything else as a
  * conflict. The server maps the trap's tag to the site's asset and prices the capture itself.
  */
-import { and, eq } from 'drizzle-orm';
-import type { FindingCapture } from '../../schemas/capture';
+import { eq } from 'drizzle-orm';
 import type { MutationResult, UpsertMutation } from '../../schemas/sync';
 import { assetForCapture } from '../assets';
-import { areas, assets, findings, headers } from '../db/schema';
+import { assets, findings } from '../db/schema';
 import type { Tx } from '../db/types';
 import { lockFinding } from './lock';
 import { captureKey } from './canonical';
 import type { PushContext, PushSurvey } from './context';
 import { nextChangeSeq } from './counter';
 import { auditFinding, keepConflict } from './journal';
-import { priceCapture } from './price';
+import { misplaced, priceCapture, siteFacts } from './price';
 
 const EDITED_ELSEWHERE =
 	'Someone changed this finding on the server after this device last had it: the server kept ' +
@@ -22,27 +21,6 @@ const EDITED_ELSEWHERE =
 const DELETED_ELSEWHERE =
 	'This finding was deleted on the server after this device last had it: this edit is kept ' +
 	'for the desk to settle';
-
-/** A reason the capture cannot be stored on this survey's site, or null. */
-async function misplaced(tx: Tx, siteId: string, c: FindingCapture): Promise<string | null> {
-	if (c.headerId) {
-		const [h] = await tx
-			.select({ id: headers.id })
-			.from(headers)
-			.where(and(eq(headers.id, c.headerId), eq(headers.siteId, siteId)))
-			.limit(1);
-		if (!h) return 'The header this finding names is not one of this site’s headers';
-	}
-	if (c.areaId) {
-		const [a] = await tx
-			.select({ id: areas.id })
-			.from(areas)
-			.where(and(eq(areas.id, c.areaId), eq(areas.siteId, siteId)))
-			.limit(1);
-		if (!a) return 'The area this finding names is not one of this site’s areas';
-	}
-	return null;
-}
 
 export async function applyUpsert(
 	tx: Tx,
@@ -56,7 +34,17 @@ export async function applyUpsert(
 		status: 'rejected',
 		reason
 	});
-	const wrongPlace = await misplaced(tx, survey.siteId, c);
+	let facts = ctx.sites.get(survey.siteId);
+	if (!facts) {
+		// A failed read is not kept: the retried mutation reads again.
+		facts = siteFacts(tx, survey.siteId).catch((e: unknown) => {
+			ctx.sites.delete(survey.siteId);
+			throw e;
+		});
+		ctx.sites.set(survey.siteId, facts);
+	}
+	const site = await facts;
+	const wrongPlace = misplaced(site, c);
 	if (wrongPlace) return rejected(wrongPlace);
 
 	const found = await lockFinding(tx, m.id);
@@ -75,7 +63,7 @@ export async function applyUpsert(
 	}
 
 	const asset = await assetForCapture(tx, survey.siteId, c);
-	const priced = await priceCapture(tx, survey.siteId, c, row?.repairCost ?? null);
+	const priced = priceCapture(site, c, row?.repairCost ?? null);
 	const changeSeq = await nextChangeSeq(tx, ctx.user.firmId);
 	if (asset && (asset.created || asset.updated)) {
 		await tx.update(assets).set({ changeSeq }).where(eq(assets.id, asset.id));
