@@ -38,7 +38,9 @@ export interface ServerConflict {
 
 /** What goes wrong with the next request(s) to a path, as a network would. */
 export type Fault =
-	{ kind: 'drop-request' } | { kind: 'drop-answer' } | { kind: 'status'; status: number };
+	| { kind: 'drop-request' }
+	| { kind: 'drop-answer' }
+	| { kind: 'status'; status: number; message?: string };
 
 type Feed = { seq: number; change: () => Change };
 
@@ -142,7 +144,9 @@ export class FakeSyncServer {
 		}
 		const fault = this.nextFault(url.pathname);
 		if (fault?.kind === 'drop-request') throw new TypeError('Failed to fetch');
-		if (fault?.kind === 'status') return json({ message: 'Service unavailable' }, fault.status);
+		if (fault?.kind === 'status') {
+			return json({ message: fault.message ?? 'Service unavailable' }, fault.status);
+		}
 		const answer = await this.route(request, url);
 		if (fault?.kind === 'drop-answer') throw new TypeError('Failed to fetch');
 		return answer;

@@ -1,4 +1,9 @@
-import { MAX_PUSH_MUTATIONS, pushResponseSchema, type Mutation } from '$lib/schemas/sync';
+import {
+	MAX_PUSH_MUTATIONS,
+	mutationSchema,
+	pushResponseSchema,
+	type Mutation
+} from '$lib/schemas/sync';
 import type { DeviceDatabase, OutboxEntry } from './db';
 import type { SyncProblem } from './sync-problem';
 import { problemFromStatus } from './sync-problem';
@@ -32,7 +37,18 @@ async function nextBatch(db: DeviceDatabase, size: number): Promise<OutboxEntry[
 	return batch;
 }
 
+/** The entry as the push takes it, checked with the server's own schema; or why it cannot go. */
 function toMutation(entry: OutboxEntry): Mutation | string {
+	const made = draftMutation(entry);
+	if (typeof made === 'string') return made;
+	const checked = mutationSchema.safeParse(made);
+	// Sent as stored: the check only vouches for it.
+	if (checked.success) return made;
+	const issue = checked.error.issues[0];
+	return `This change cannot be sent as it is (${issue.path.join('.')}: ${issue.message})`;
+}
+
+function draftMutation(entry: OutboxEntry): Mutation | string {
 	const base = {
 		mutationId: entry.mutationId,
 		entity: 'finding' as const,
@@ -72,19 +88,25 @@ export async function pushOutbox(
 ): Promise<{ tally: PushTally; problem?: SyncProblem }> {
 	const tally: PushTally = { pushed: 0, duplicates: 0, conflicts: 0, rejected: 0 };
 	const size = Math.max(1, Math.min(batchSize, MAX_PUSH_MUTATIONS));
+	// After the server refused a whole batch as unreadable, entries go one by one, so the
+	// others still go and only the unreadable one keeps the reason.
+	let oneByOne = false;
 	for (;;) {
-		const batch = await nextBatch(db, size);
+		let batch = await nextBatch(db, oneByOne ? 1 : size);
 		if (batch.length === 0) return { tally };
 		const mutations: Mutation[] = [];
 		for (const entry of batch) {
 			const m = toMutation(entry);
 			if (typeof m === 'string') {
+				// Those before it go first; it stops the drain when its turn comes.
+				if (mutations.length > 0) break;
 				await markRefused(db, [entry], m);
 				tally.rejected++;
 				return { tally, problem: { kind: 'rejected', retryable: false, message: m } };
 			}
 			mutations.push(m);
 		}
+		batch = batch.slice(0, mutations.length);
 		await markTried(db, batch);
 		let response: Response;
 		try {
@@ -98,7 +120,11 @@ export async function pushOutbox(
 			// repeat as a duplicate.
 			return { tally, problem: problemFromStatus(0) };
 		}
-		if (response.status === 400) {
+		if ((response.status === 400 || response.status === 413) && batch.length > 1) {
+			oneByOne = true;
+			continue;
+		}
+		if (response.status === 400 || response.status === 413) {
 			const body = (await response.json().catch(() => ({}))) as { message?: unknown };
 			const reason =
 				typeof body.message === 'string' ? body.message : 'The server could not read these changes';

@@ -66,6 +66,57 @@ describe('syncOnce, refusals', () => {
 		expect((await db.outbox.toArray()).map((e) => e.recordId)).toEqual([refused.id]);
 	});
 
+	it('an entry that cannot be sent as stored is kept with the reason; those before it go', async () => {
+		const srv = server();
+		const db = await device(srv);
+		const first = leakCapture();
+		await saveFinding(db, first);
+		const broken = leakCapture();
+		await db.outbox.add({
+			mutationId: crypto.randomUUID(),
+			entity: 'finding',
+			op: 'upsert',
+			recordId: broken.id,
+			baseVersion: 0,
+			payload: { ...broken, inputs: {} } as never,
+			surveyId: SURVEY_ID,
+			attempts: 0,
+			createdAt: broken.createdAt
+		});
+		const after = trapCapture();
+		await saveFinding(db, after);
+		const summary = await syncOnce(db, { fetch: srv.fetch });
+		expect(summary.problem).toMatchObject({ kind: 'rejected', retryable: false });
+		expect(summary.problem?.message).toMatch(/^This change cannot be sent as it is \(data\.inputs/);
+		expect([...srv.findings.keys()]).toEqual([first.id]);
+		const outbox = await db.outbox.orderBy('seq').toArray();
+		expect(outbox.map((e) => [e.recordId, e.lastError !== undefined])).toEqual([
+			[broken.id, true],
+			[after.id, false]
+		]);
+	});
+
+	it('a batch the server cannot read goes again one by one; only the unreadable one is kept', async () => {
+		const srv = server();
+		const db = await device(srv);
+		const captures = [leakCapture(), leakCapture(), trapCapture()];
+		for (const c of captures) await saveFinding(db, c);
+		const message = 'mutations.1.data: not a capture';
+		srv.fail('/api/sync/push', { kind: 'status', status: 400, message });
+		srv.fail('/api/sync/push', { kind: 'status', status: 400, message }, 1);
+		const summary = await syncOnce(db, { fetch: srv.fetch });
+		expect(summary.problem).toMatchObject({ kind: 'bad-request', retryable: false, message });
+		expect([...srv.findings.keys()]).toEqual([captures[0].id]);
+		const outbox = await db.outbox.orderBy('seq').toArray();
+		expect(outbox.map((e) => [e.recordId, e.lastError])).toEqual([
+			[captures[1].id, message],
+			[captures[2].id, undefined]
+		]);
+		// Read this time: everything goes.
+		expect((await syncOnce(db, { fetch: srv.fetch })).problem).toBeUndefined();
+		expect(srv.findings.size).toBe(3);
+	});
+
 	it('a photo refused as not an image is kept with the reason and skipped; the others go', async () => {
 		const srv = server();
 		const db = await device(srv);
