@@ -4,7 +4,7 @@
  * started here on 127.0.0.1.
  */
 import { createHash, randomUUID } from 'node:crypto';
-import { mkdtempSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import S3rver from 's3rver';
@@ -19,6 +19,9 @@ import {
 import { JPEG } from './photo-bytes';
 
 const BUCKET = 'steamwisp-photos';
+/** Every directory this spec makes, under one temporary parent removed at the end. */
+const parent = mkdtempSync(join(tmpdir(), 'steamwisp-photo-store-'));
+const tempDir = (name: string) => mkdtempSync(join(parent, name));
 let s3: S3rver;
 let endpoint = '';
 
@@ -27,7 +30,7 @@ beforeAll(async () => {
 		address: '127.0.0.1',
 		port: 0,
 		silent: true,
-		directory: mkdtempSync(join(tmpdir(), 'steamwisp-s3rver-')),
+		directory: tempDir('s3rver-'),
 		configureBuckets: [{ name: BUCKET, configs: [] }]
 	});
 	const { port } = (await s3.run()) as { port: number };
@@ -35,6 +38,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
 	await s3.close();
+	rmSync(parent, { recursive: true, force: true });
 });
 
 /** The SHA-256 of a stream's bytes: compared instead of 350 kB element by element. */
@@ -43,7 +47,7 @@ const hashOf = async (stream: ReadableStream<Uint8Array>) =>
 const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
 
 const stores: [string, () => PhotoStore][] = [
-	['local disk', () => new LocalDiskStore(mkdtempSync(join(tmpdir(), 'steamwisp-disk-')))],
+	['local disk', () => new LocalDiskStore(tempDir('disk-'))],
 	[
 		'S3 (s3rver)',
 		() =>
@@ -90,7 +94,7 @@ describe.each(stores)('%s', (name, make) => {
 
 describe('local disk', () => {
 	it('a write that fails leaves neither the photo nor a temporary file', async () => {
-		const root = mkdtempSync(join(tmpdir(), 'steamwisp-disk-'));
+		const root = tempDir('disk-');
 		const store = new LocalDiskStore(root);
 		const key = photoKey(randomUUID());
 		const broken = new Proxy(JPEG, {

@@ -4,7 +4,7 @@
  * by size and by tenancy with nothing written, readable only with the survey's authorization.
  */
 import { createHash, randomUUID } from 'node:crypto';
-import { mkdtempSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { count, eq, inArray, like } from 'drizzle-orm';
@@ -86,6 +86,7 @@ afterAll(async () => {
 	// The traps its pushes registered: left behind, they would head the demo's traps to test.
 	await db.delete(schema.assets).where(like(schema.assets.tag, 'PHOTO-SPEC-%'));
 	await pool.end();
+	rmSync(dir, { recursive: true, force: true });
 });
 
 describe('a photo is stored once and whole', () => {
