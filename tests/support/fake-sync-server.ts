@@ -114,6 +114,11 @@ export class FakeSyncServer {
 		Object.assign(row, { deleted: true, version: row.version + 1, seq: ++this.counter });
 	}
 
+	/** The network is sound again: every fault still queued is dropped. */
+	heal(): void {
+		this.faults.splice(0);
+	}
+
 	/** A request to `path` meets `fault`: the next one, or the one after `skip` more. */
 	fail(path: string, fault: Fault, skip = 0): void {
 		this.faults.push({ path, fault, skip });

@@ -155,4 +155,24 @@ describe('syncOnce, pushing', () => {
 		expect(srv.conflicts).toHaveLength(1);
 		expect(await phoneB.conflicts.count()).toBe(1);
 	});
+
+	it('a conflict is settled when the server moves past it: the desk’s answer replaces the edit', async () => {
+		const srv = server();
+		const trap = trapCapture();
+		srv.edit(trap);
+		const phoneA = await device(srv);
+		const phoneB = await device(srv);
+		await saveFinding(phoneA, { ...trap, notes: 'A' });
+		await saveFinding(phoneB, { ...trap, notes: 'B' });
+		await syncOnce(phoneA, { fetch: srv.fetch });
+		await syncOnce(phoneB, { fetch: srv.fetch });
+		expect(await phoneB.findings.get(trap.id)).toMatchObject({ conflict: 1, pending: 1 });
+		// The consultant settles it at the desk: a new server version.
+		const settled = srv.edit({ ...trap, notes: 'Settled: B was right' });
+		await syncOnce(phoneB, { fetch: srv.fetch });
+		const after = await phoneB.findings.get(trap.id);
+		expect(after).toMatchObject({ capture: settled.capture, version: 3, pending: 0 });
+		expect(after?.conflict).toBeUndefined();
+		expect(await phoneB.conflicts.count()).toBe(0);
+	});
 });
