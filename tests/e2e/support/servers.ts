@@ -28,6 +28,9 @@ export function appEnv(port: number, extra: Record<string, string> = {}): Record
 		PORT: String(port),
 		ORIGIN: `http://127.0.0.1:${port}`,
 		STEAMWISP_DB_NAME: testDbName,
+		// As npm start does: adapter-node's own 512K would refuse a photo the contract allows.
+		BODY_SIZE_LIMIT: '9M',
+		STEAMWISP_PHOTO_DIR: resolve(import.meta.dirname, '../../../.data/photos-e2e'),
 		...e2eMail,
 		...extra
 	};
