@@ -178,6 +178,25 @@ describe('sync manager', () => {
 		expect(m.state.lastExchangeAt).not.toBeNull();
 	});
 
+	it('takes the device’s sync lock for each exchange, so two tabs take turns', async () => {
+		const db = fresh();
+		const held: string[] = [];
+		const m = createSyncManager({
+			db,
+			fetch: async () => emptyPull(),
+			locks: {
+				request: (async (name: string, run: () => Promise<unknown>) => {
+					held.push(name);
+					return run();
+				}) as never
+			},
+			...manualTimers()
+		});
+		await m.run();
+		expect(held).toEqual([`${db.name}-sync`]);
+		expect(m.state.phase).toBe('idle');
+	});
+
 	it('a problem a person must solve waits for them: no retry timer', async () => {
 		const db = fresh();
 		const timers = manualTimers();

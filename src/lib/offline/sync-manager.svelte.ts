@@ -24,6 +24,11 @@ export interface SyncManagerOptions {
 	setTimeout?: (run: () => void, ms: number) => unknown;
 	clearTimeout?: (handle: unknown) => void;
 	/**
+	 * Web Locks (`navigator.locks` where the browser has it): two tabs of the Walk on one
+	 * device take turns, so their exchanges never drain the same outbox at once.
+	 */
+	locks?: Pick<LockManager, 'request'>;
+	/**
 	 * Asks the browser to wake the app when a connection returns (Background Sync); called
 	 * after each exchange that ends in retryable trouble. Defaults to requestBackgroundSync
 	 * when a window is given.
@@ -130,7 +135,9 @@ export class SyncManager {
 		this.state.phase = 'sending';
 		let summary;
 		try {
-			summary = await syncOnce(this.o.db, { fetch: this.o.fetch, now: this.now });
+			const once = () => syncOnce(this.o.db, { fetch: this.o.fetch, now: this.now });
+			const locks = this.o.locks ?? (this.o.window ? globalThis.navigator?.locks : undefined);
+			summary = locks ? await locks.request(`${this.o.db.name}-sync`, once) : await once();
 		} catch (e) {
 			summary = {
 				problem: {
