@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# The Walk's benchmark (part of `npm run bench`): a fresh bench database with the demo
-# scenario, the built app on 127.0.0.1, Debian's Chromium driven by scripts/bench-walk.ts.
+# The Walk's and sync's benchmarks (part of `npm run bench`): a fresh bench database with the
+# demo scenario, the built app on 127.0.0.1, Debian's Chromium driven by scripts/bench-walk.ts,
+# then the device's sync client against the same build (scripts/bench-sync.ts).
 # Prints figures beside their targets; asserts nothing.
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
@@ -17,3 +18,4 @@ npx tsx scripts/seed.ts >/dev/null
 say "building the app for the Walk benchmark…"
 node_modules/.bin/vite build --logLevel error >/dev/null
 npx tsx scripts/bench-walk.ts
+npx tsx scripts/bench-sync.ts

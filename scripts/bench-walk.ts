@@ -8,6 +8,7 @@
  * Figures are printed; nothing is asserted.
  */
 import { spawn } from 'node:child_process';
+import { waitForApp } from './bench-app';
 import { readFileSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
 import { chromium, type Page } from '@playwright/test';
@@ -28,20 +29,8 @@ const app = spawn('node', ['build'], {
 	stdio: ['ignore', 'ignore', 'inherit']
 });
 
-async function waitForApp() {
-	for (let i = 0; i < 100; i++) {
-		try {
-			if ((await fetch(`${ORIGIN}/api/health`)).ok) return;
-		} catch {
-			// not listening yet
-		}
-		await new Promise((r) => setTimeout(r, 200));
-	}
-	throw new Error('The built app did not start');
-}
-
 const browser = await (async () => {
-	await waitForApp();
+	await waitForApp(ORIGIN);
 	return chromium.launch(chromiumLaunchOptions);
 })();
 

@@ -18,7 +18,15 @@ import { appFetch } from './chaos/app-fetch';
 import { testDatabase } from './db';
 import { auditorA, auditorB, clientA, clientB, consultantA } from './demo-people';
 import { JPEG, impostors, png, webp } from './photo-bytes';
-import { batch, fieldSurveyId, postPush, remove, trapCapture, upsert } from './sync-api';
+import {
+	batch,
+	fieldSurveyId,
+	postPush,
+	remove,
+	trapCapture,
+	upsert,
+	setFieldStage
+} from './sync-api';
 
 const dir = mkdtempSync(join(tmpdir(), 'steamwisp-photos-spec-'));
 process.env.STEAMWISP_PHOTO_DIR ??= dir;
@@ -69,10 +77,7 @@ async function nothingStoredFor(id: string) {
 }
 
 beforeAll(async () => {
-	await db
-		.update(schema.surveys)
-		.set({ status: 'in-field' })
-		.where(eq(schema.surveys.id, fieldSurveyId));
+	await setFieldStage(db);
 });
 
 afterAll(async () => {

@@ -4,12 +4,15 @@
  * field passes the shared capture schema, with new ids and tags of this spec's own.
  */
 import { randomUUID } from 'node:crypto';
+import { eq } from 'drizzle-orm';
 import type { FindingCapture } from '../../src/lib/schemas/capture';
 import type { Mutation } from '../../src/lib/schemas/sync';
 import { demoSurveys } from '../../src/lib/server/seed/demo';
 import { captureOf, demoFindings } from '../../src/lib/server/seed/findings';
 import { POST as pushHandler } from '../../src/routes/api/sync/push/+server';
 import { GET as pullHandler } from '../../src/routes/api/sync/pull/+server';
+import * as schema from '../../src/lib/server/db/schema';
+import type { testDatabase } from './db';
 import { call } from './walk-api';
 
 export const postPush = (user: SessionUser | null, body: unknown, raw?: string) =>
@@ -30,6 +33,16 @@ export const getPull = (user: SessionUser | null, query: string) =>
 	call(pullHandler as never, '/api/sync/pull', user, `/api/sync/pull?${query}`);
 
 export const fieldSurveyId = demoSurveys[0].id;
+
+type TestDb = ReturnType<typeof testDatabase>['db'];
+
+/** Moves the demo survey in the field to `stage` (specs open it for recording, or close it). */
+export async function setFieldStage(db: TestDb, stage = 'in-field'): Promise<void> {
+	await db
+		.update(schema.surveys)
+		.set({ status: stage })
+		.where(eq(schema.surveys.id, fieldSurveyId));
+}
 
 const template = demoFindings.find(
 	(f) => f.surveyId === fieldSurveyId && f.kind === 'trap' && f.inputs.condition === 'failed-open'

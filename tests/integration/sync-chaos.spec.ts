@@ -27,7 +27,7 @@ import { mulberry32, type Rng } from './chaos/prng';
 import { deleteOne, editOne, newIntent, recordNew } from './chaos/scenario';
 import { testDatabase } from './db';
 import { auditorA, consultantA } from './demo-people';
-import { fieldSurveyId } from './sync-api';
+import { fieldSurveyId, setFieldStage } from './sync-api';
 import { getSnapshot } from './walk-api';
 
 // Photos of these runs go to a directory of their own, not the project's data directory.
@@ -179,10 +179,7 @@ async function withDatabaseRestart(device: DeviceDatabase, rng: Rng, at: number)
 
 beforeAll(async () => {
 	// The survey in the field must be open for recording.
-	await db
-		.update(schema.surveys)
-		.set({ status: 'in-field' })
-		.where(inArray(schema.surveys.id, [fieldSurveyId]));
+	await setFieldStage(db);
 });
 
 describe('seeded source', () => {

@@ -11,7 +11,16 @@ import { nextChangeSeq, unassignAuditor } from '../../src/lib/server/sync/counte
 import { currentCursor } from '../../src/lib/server/walk/snapshot';
 import { testDatabase } from './db';
 import { auditorA, auditorB, clientA } from './demo-people';
-import { batch, fieldSurveyId, getPull, postPush, remove, trapCapture, upsert } from './sync-api';
+import {
+	batch,
+	fieldSurveyId,
+	getPull,
+	postPush,
+	remove,
+	trapCapture,
+	upsert,
+	setFieldStage
+} from './sync-api';
 
 const { pool, db } = testDatabase();
 const TAG = 'SYNC-PULL-';
@@ -35,10 +44,7 @@ const page = async (user: SessionUser, query: string): Promise<PullResponse> => 
 let start = 0;
 
 beforeAll(async () => {
-	await db
-		.update(schema.surveys)
-		.set({ status: 'in-field' })
-		.where(eq(schema.surveys.id, fieldSurveyId));
+	await setFieldStage(db);
 	await db.insert(schema.users).values({ ...helper, unitSystem: 'SI' });
 	await db.insert(schema.surveyAuditors).values({ surveyId: fieldSurveyId, userId: helper.id });
 	start = await currentCursor(db, auditorA.firmId);
@@ -150,10 +156,7 @@ describe('who sees what', () => {
 				data: null
 			});
 		} finally {
-			await db
-				.update(schema.surveys)
-				.set({ status: 'in-field' })
-				.where(eq(schema.surveys.id, fieldSurveyId));
+			await setFieldStage(db);
 		}
 	});
 });

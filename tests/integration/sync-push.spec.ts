@@ -14,7 +14,15 @@ import { evaluateFinding } from '../../src/lib/steam/index';
 import { ENGINE_VERSION } from '../../src/lib/steam/version';
 import { testDatabase } from './db';
 import { auditorA, auditorB, clientA, consultantA } from './demo-people';
-import { batch, fieldSurveyId, postPush, remove, trapCapture, upsert } from './sync-api';
+import {
+	batch,
+	fieldSurveyId,
+	postPush,
+	remove,
+	trapCapture,
+	upsert,
+	setFieldStage
+} from './sync-api';
 
 const { pool, db } = testDatabase();
 const TAG = 'SYNC-PUSH-';
@@ -45,10 +53,7 @@ const capture = (n: string) => {
 
 beforeAll(async () => {
 	// The survey in the field must be open for recording (another spec may have moved it).
-	await db
-		.update(schema.surveys)
-		.set({ status: 'in-field' })
-		.where(eq(schema.surveys.id, fieldSurveyId));
+	await setFieldStage(db);
 });
 
 afterAll(async () => {
@@ -328,19 +333,13 @@ describe('refusals', () => {
 
 	it('a survey closed to recording rejects the change, which applies once it reopens', async () => {
 		const m = upsert(capture('10'), 0);
-		await db
-			.update(schema.surveys)
-			.set({ status: 'closed' })
-			.where(eq(schema.surveys.id, fieldSurveyId));
+		await setFieldStage(db, 'closed');
 		try {
 			const [a] = answers(await postPush(auditorA, batch(m)));
 			expect(a.status).toBe('rejected');
 			expect(a.reason).toMatch(/no longer open for recording/);
 		} finally {
-			await db
-				.update(schema.surveys)
-				.set({ status: 'in-field' })
-				.where(eq(schema.surveys.id, fieldSurveyId));
+			await setFieldStage(db);
 		}
 		const [b] = answers(await postPush(auditorA, batch(m)));
 		expect(b).toMatchObject({ status: 'applied', version: 1 });

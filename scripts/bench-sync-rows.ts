@@ -1,0 +1,69 @@
+/**
+ * Rows for the pull benchmark: `n` more findings on the demo survey in the field, written
+ * straight to the bench database the way the push route leaves them (a capture's columns,
+ * the server's results copied from a finding it priced, one change_seq each, the firm's counter
+ * moved past them).
+ */
+import { randomUUID } from 'node:crypto';
+import { and, desc, eq, isNotNull, sql } from 'drizzle-orm';
+import { drizzle } from 'drizzle-orm/mysql2';
+import mysql from 'mysql2/promise';
+import * as schema from '../src/lib/server/db/schema';
+import { demoSurveys } from '../src/lib/server/seed/demo';
+import { databaseUrl } from './env';
+
+export async function benchPullRows(n: number): Promise<void> {
+	const pool = mysql.createPool({ uri: databaseUrl(), connectionLimit: 2 });
+	const db = drizzle(pool, { schema, mode: 'default' });
+	const survey = demoSurveys[0];
+	try {
+		const [priced] = await db
+			.select()
+			.from(schema.findings)
+			.where(and(eq(schema.findings.surveyId, survey.id), isNotNull(schema.findings.results)))
+			.orderBy(desc(schema.findings.changeSeq))
+			.limit(1);
+		await db.transaction(async (tx) => {
+			await tx
+				.insert(schema.changeCounters)
+				.values({ firmId: survey.firmId, value: 0 })
+				.onDuplicateKeyUpdate({ set: { firmId: sql`firm_id` } });
+			const [counter] = await tx
+				.select()
+				.from(schema.changeCounters)
+				.where(eq(schema.changeCounters.firmId, survey.firmId))
+				.for('update');
+			const start = Number(counter.value);
+			for (let at = 0; at < n; at += 500) {
+				const rows = Array.from({ length: Math.min(500, n - at) }, (_, i) => {
+					const k = at + i;
+					const when = new Date(Date.parse('2026-11-21T06:00:00Z') + k * 1000);
+					return {
+						id: randomUUID(),
+						surveyId: survey.id,
+						kind: priced.kind,
+						headerId: priced.headerId,
+						areaId: priced.areaId,
+						location: `Pull bench line ${k}`,
+						notes: '',
+						photoIds: [],
+						inputs: priced.inputs,
+						results: priced.results,
+						resultsEngine: priced.resultsEngine,
+						recordedAt: when,
+						capturedAt: when,
+						version: 1,
+						changeSeq: start + k + 1
+					};
+				});
+				await tx.insert(schema.findings).values(rows);
+			}
+			await tx
+				.update(schema.changeCounters)
+				.set({ value: start + n })
+				.where(eq(schema.changeCounters.firmId, survey.firmId));
+		});
+	} finally {
+		await pool.end();
+	}
+}
