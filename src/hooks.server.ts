@@ -3,6 +3,7 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { dev } from '$app/environment';
 import { lucia } from '$lib/server/auth/lucia';
 import { pool } from '$lib/server/db';
+import { MAX_FORM_BYTES, readForm } from '$lib/server/forms';
 import { guardRoute } from '$lib/server/policy';
 
 // adapter-node closes the HTTP server on SIGTERM/SIGINT, then emits this; the process can only
@@ -12,6 +13,24 @@ if (!dev) {
 		pool.end().catch(() => {});
 	});
 }
+
+/**
+ * Pages' form posts are small; the API's own routes set their own limits (the app's
+ * BODY_SIZE_LIMIT is large, for photos). A form post declared larger is read to its end and
+ * answered 413 before any page code runs, whoever sends it.
+ */
+const formLimit: Handle = async ({ event, resolve }) => {
+	const { request, url } = event;
+	const declared = Number(request.headers.get('content-length') ?? 0);
+	if (request.method !== 'GET' && !url.pathname.startsWith('/api/') && declared > MAX_FORM_BYTES) {
+		await readForm(request).catch(() => undefined);
+		return new Response('That form is too large to accept.', {
+			status: 413,
+			headers: { 'content-type': 'text/plain; charset=utf-8' }
+		});
+	}
+	return resolve(event);
+};
 
 /** Fills locals.user and locals.session from the session cookie; refreshes or clears it. */
 const session: Handle = async ({ event, resolve }) => {
@@ -74,8 +93,9 @@ const headers: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-// headers first so it wraps everything after it; guard last, once the session is known.
-export const handle = sequence(headers, session, guard);
+// headers first so it wraps everything after it; oversized forms refused before any session
+// work; guard last, once the session is known.
+export const handle = sequence(headers, formLimit, session, guard);
 
 /**
  * Unexpected errors are logged with their stack and shown to people only as a status and a

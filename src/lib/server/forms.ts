@@ -1,20 +1,36 @@
 /**
  * Reading form posts in actions. SvelteKit already answers 415 to a body that is not a form;
- * this keeps adapter-node's 413 for one over BODY_SIZE_LIMIT, turns a form that cannot be parsed
+ * this answers 413 to one over MAX_FORM_BYTES (the app's BODY_SIZE_LIMIT is larger, for
+ * photos), turns a form that cannot be parsed
  * (a broken multipart body, say) into a clear 400 instead of a 500, and collapses it to plain
  * strings so a file smuggled into a text field fails validation rather than reaching a query.
  */
 import { error, fail } from '@sveltejs/kit';
 import type { z } from 'zod';
+import { readLimitedBody } from './body';
+
+/** Bytes a form post may have: every form of the app is a few kB. */
+export const MAX_FORM_BYTES = 512 * 1024;
+
+const unreadable = 'That form could not be read. Reload the page and try again.';
 
 export async function readForm(request: Request): Promise<Record<string, string>> {
+	const body = await readLimitedBody(request, MAX_FORM_BYTES, {
+		tooLarge: 'That form is too large to accept.',
+		cut: unreadable,
+		drain: true
+	});
 	let data: FormData;
 	try {
-		data = await request.formData();
+		data = await new Request(request.url, {
+			method: request.method,
+			headers: request.headers,
+			body: new Uint8Array(body)
+		}).formData();
 	} catch (e) {
 		// adapter-node stops reading past BODY_SIZE_LIMIT and says so with a 413.
 		if ((e as { status?: number }).status === 413) error(413, 'That form is too large to accept.');
-		error(400, 'That form could not be read. Reload the page and try again.');
+		error(400, unreadable);
 	}
 	const fields: Record<string, string> = {};
 	for (const [name, value] of data) {
