@@ -12,7 +12,8 @@ import * as schema from '../src/lib/server/db/schema';
 import { demoSurveys } from '../src/lib/server/seed/demo';
 import { databaseUrl } from './env';
 
-export async function benchPullRows(n: number): Promise<void> {
+/** Writes the rows; returns the firm's change counter just before them. */
+export async function benchPullRows(n: number): Promise<number> {
 	const pool = mysql.createPool({ uri: databaseUrl(), connectionLimit: 2 });
 	const db = drizzle(pool, { schema, mode: 'default' });
 	const survey = demoSurveys[0];
@@ -23,7 +24,7 @@ export async function benchPullRows(n: number): Promise<void> {
 			.where(and(eq(schema.findings.surveyId, survey.id), isNotNull(schema.findings.results)))
 			.orderBy(desc(schema.findings.changeSeq))
 			.limit(1);
-		await db.transaction(async (tx) => {
+		return await db.transaction(async (tx) => {
 			await tx
 				.insert(schema.changeCounters)
 				.values({ firmId: survey.firmId, value: 0 })
@@ -62,6 +63,7 @@ export async function benchPullRows(n: number): Promise<void> {
 				.update(schema.changeCounters)
 				.set({ value: start + n })
 				.where(eq(schema.changeCounters.firmId, survey.firmId));
+			return start;
 		});
 	} finally {
 		await pool.end();
