@@ -11,9 +11,11 @@ const dbs: Dexie[] = [];
 afterEach(async () => {
 	for (const d of dbs.splice(0)) await d.delete();
 });
-const fresh = () => {
+/** A device database holding one survey (so an exchange pulls, as on a working phone). */
+const fresh = async () => {
 	const d = testDb();
 	dbs.push(d);
+	await d.surveys.put({ id: SURVEY_ID, siteId: SITE_ID, cursor: 0 } as never);
 	return d;
 };
 
@@ -50,7 +52,7 @@ describe('back-off', () => {
 
 describe('sync manager', () => {
 	it('backs off after network trouble, longer each time, and Send now starts again at once', async () => {
-		const db = fresh();
+		const db = await fresh();
 		const timers = manualTimers();
 		let calls = 0;
 		const m = createSyncManager({
@@ -82,7 +84,7 @@ describe('sync manager', () => {
 	});
 
 	it('waits longer after each failure up to 5 min, and starts over after a success', async () => {
-		const db = fresh();
+		const db = await fresh();
 		const timers = manualTimers();
 		let failing = true;
 		const m = createSyncManager({
@@ -119,7 +121,7 @@ describe('sync manager', () => {
 	});
 
 	it('while a back-off wait runs, the minute’s tick does not knock; the wait does', async () => {
-		const db = fresh();
+		const db = await fresh();
 		const timers = manualTimers();
 		let calls = 0;
 		const wakes: string[] = [];
@@ -152,7 +154,7 @@ describe('sync manager', () => {
 	});
 
 	it('runs one exchange at a time: triggers during a run ask for one follow-up', async () => {
-		const db = fresh();
+		const db = await fresh();
 		let release!: () => void;
 		let calls = 0;
 		const m = createSyncManager({
@@ -179,7 +181,7 @@ describe('sync manager', () => {
 	});
 
 	it('takes the device’s sync lock for each exchange, so two tabs take turns', async () => {
-		const db = fresh();
+		const db = await fresh();
 		const held: string[] = [];
 		const m = createSyncManager({
 			db,
@@ -198,7 +200,7 @@ describe('sync manager', () => {
 	});
 
 	it('a problem a person must solve waits for them: no retry timer', async () => {
-		const db = fresh();
+		const db = await fresh();
 		const timers = manualTimers();
 		const m = createSyncManager({
 			db,
@@ -212,8 +214,7 @@ describe('sync manager', () => {
 	});
 
 	it('starts at once, counts what waits, and runs again when the browser comes online', async () => {
-		const db = fresh();
-		await db.surveys.put({ id: SURVEY_ID, siteId: SITE_ID, cursor: 0 } as never);
+		const db = await fresh();
 		await saveFinding(db, trapCapture());
 		const listeners = new Map<string, () => void>();
 		let calls = 0;
@@ -243,7 +244,36 @@ describe('sync manager', () => {
 	});
 });
 
+describe('an exchange with nothing to do', () => {
+	it('makes no request on a device with no survey and counts as no contact', async () => {
+		const db = testDb();
+		dbs.push(db);
+		let calls = 0;
+		const m = createSyncManager({
+			db,
+			fetch: async () => {
+				calls++;
+				return emptyPull();
+			},
+			...manualTimers()
+		});
+		await m.run();
+		expect(calls).toBe(0);
+		expect(m.state.lastExchangeAt).toBeNull();
+		expect(describeSync(m.state).headline).toBe('Nothing waiting to send');
+	});
+});
+
 describe('describeSync', () => {
+	it('says nothing is waiting, not "All sent", until the server has answered', () => {
+		expect(describeSync(initialSyncState()).headline).toBe('Nothing waiting to send');
+		const offline = {
+			...initialSyncState(),
+			phase: 'offline' as const,
+			lastExchangeAt: '2026-11-20T09:00:00Z'
+		};
+		expect(describeSync(offline).headline).toBe('Nothing waiting to send');
+	});
 	const now = new Date('2026-11-20T10:45:00');
 	it('says all sent, and when', () => {
 		const w = describeSync(

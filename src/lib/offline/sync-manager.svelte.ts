@@ -9,6 +9,7 @@
 import { liveQuery } from 'dexie';
 import type { DeviceDatabase } from './db';
 import { syncCounts } from './sync-counts';
+import { getMeta } from './sync-meta';
 import { syncOnce } from './sync';
 import { retryDelay } from './sync-backoff';
 import { initialSyncState, type SyncState } from './sync-state';
@@ -154,7 +155,9 @@ export class SyncManager {
 				phase: 'idle',
 				problem: null,
 				nextTryAt: null,
-				lastExchangeAt: this.now().toISOString()
+				// As syncOnce kept it: an exchange that needed no request is no contact.
+				lastExchangeAt:
+					(await getMeta<string>(this.o.db, 'lastExchangeAt')) ?? this.state.lastExchangeAt
 			});
 			return;
 		}

@@ -61,7 +61,9 @@ export function describeSync(s: SyncState, now = new Date()): SyncWords {
 	if (s.phase === 'sending') headline = what ? `Sending ${what}…` : 'Checking with the server…';
 	else if (what) headline = `${what} waiting to send`;
 	else if (attention > 0) headline = 'Sent, but something needs your attention';
-	else headline = 'All sent';
+	// "All sent" only once the server has said so; before that there is merely nothing queued.
+	else if (s.lastExchangeAt && s.phase === 'idle') headline = 'All sent';
+	else headline = 'Nothing waiting to send';
 
 	if (s.conflicts > 0) {
 		details.push(

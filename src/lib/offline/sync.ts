@@ -37,13 +37,13 @@ export interface SyncSummary {
 export async function syncOnce(db: DeviceDatabase, options: SyncOptions): Promise<SyncSummary> {
 	const now = options.now ?? (() => new Date());
 	const id = await deviceId(db);
-	const push = await pushOutbox(
-		db,
-		options.fetch,
-		id,
-		options.batchSize ?? MAX_PUSH_MUTATIONS,
-		now
-	);
+	// Counted so that an exchange with nothing to do and no request made is no "last exchange".
+	let requests = 0;
+	const fetchFn: typeof fetch = (input, init) => {
+		requests++;
+		return options.fetch(input, init);
+	};
+	const push = await pushOutbox(db, fetchFn, id, options.batchSize ?? MAX_PUSH_MUTATIONS, now);
 	const summary: SyncSummary = {
 		...push.tally,
 		photosSent: 0,
@@ -53,18 +53,22 @@ export async function syncOnce(db: DeviceDatabase, options: SyncOptions): Promis
 	let problem = push.problem;
 	// A rejected change stops the outbox, not the photos of findings already sent nor the pull.
 	if (!problem || problem.kind === 'rejected' || problem.kind === 'not-found') {
-		const photos = await uploadPhotos(db, options.fetch);
+		const photos = await uploadPhotos(db, fetchFn);
 		summary.photosSent = photos.sent;
 		problem ??= photos.problem;
-		if (!photos.problem || !photos.problem.retryable) {
-			const pull = await pullChanges(db, options.fetch, summary.cursor, options.pullLimit);
+		// With no survey on the device there is nothing a pull could update.
+		const surveys = await db.surveys.count();
+		if (surveys > 0 && (!photos.problem || !photos.problem.retryable)) {
+			const pull = await pullChanges(db, fetchFn, summary.cursor, options.pullLimit);
 			summary.pulled = pull.pulled;
 			summary.cursor = pull.cursor;
 			problem ??= pull.problem;
 		}
 	}
 	await db.transaction('rw', db.meta, async () => {
-		if (!problem || !problem.retryable) await setMeta(db, 'lastExchangeAt', now().toISOString());
+		if (requests > 0 && (!problem || !problem.retryable)) {
+			await setMeta(db, 'lastExchangeAt', now().toISOString());
+		}
 		await setMeta(db, 'lastProblem', problem?.message ?? null);
 	});
 	return problem ? { ...summary, problem } : summary;
