@@ -5,6 +5,7 @@ import type { CostBasis } from '../../schemas/site';
 import { evaluateFinding } from '../../steam/index';
 import { ENGINE_VERSION } from '../../steam/version';
 import { assetForCapture } from '../assets';
+import { captureColumns } from '../walk/capture-row';
 import * as schema from '../db/schema';
 import type { Db } from '../db/types';
 import { demoAreas } from './areas';
@@ -53,22 +54,13 @@ export async function seedDemoFindings(db: Db): Promise<void> {
 			await tx
 				.insert(findings)
 				.values({
+					...captureColumns(capture, asset?.id ?? null),
 					id: capture.id,
 					surveyId: capture.surveyId,
-					kind: capture.kind,
-					assetId: asset?.id ?? null,
-					headerId: capture.headerId ?? null,
-					areaId: capture.areaId ?? null,
-					location: capture.location,
-					notes: capture.notes,
-					photoIds: capture.photoIds,
-					inputs: capture.inputs,
 					results: JSON.parse(JSON.stringify(results)),
 					resultsEngine: ENGINE_VERSION,
 					repairCost: finding.repairCost ?? null,
-					status: finding.status,
-					recordedAt: new Date(capture.createdAt),
-					capturedAt: new Date(capture.updatedAt)
+					status: finding.status
 				})
 				.onDuplicateKeyUpdate(keep);
 		}

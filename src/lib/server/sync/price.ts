@@ -55,6 +55,26 @@ export async function siteFacts(tx: Executor, siteId: string): Promise<SiteFacts
 	};
 }
 
+/**
+ * siteFacts read once per push: later mutations of the batch share the first read. A failed
+ * read is not kept, so the retried mutation reads again.
+ */
+export function siteFactsOnce(
+	tx: Executor,
+	cache: Map<string, Promise<SiteFacts>>,
+	siteId: string
+): Promise<SiteFacts> {
+	let facts = cache.get(siteId);
+	if (!facts) {
+		facts = siteFacts(tx, siteId).catch((e: unknown) => {
+			cache.delete(siteId);
+			throw e;
+		});
+		cache.set(siteId, facts);
+	}
+	return facts;
+}
+
 /** Why the capture cannot be stored on this site (a header or area of another), or null. */
 export function misplaced(site: SiteFacts, c: FindingCapture): string | null {
 	if (c.headerId && !site.headers.some((h) => h.id === c.headerId)) {

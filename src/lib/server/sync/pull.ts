@@ -50,7 +50,7 @@ const feedFigures = {
 	water: figure('$.water')
 };
 
-type Sequenced = { seq: number; change: Change | (() => Promise<Change>) };
+type Sequenced = { seq: number; change: Change };
 
 async function findingFeed(tx: Executor, user: SessionUser, since: number, n: number) {
 	// Two steps: the page's ids from the (survey_id, change_seq) index alone, then the whole rows
@@ -173,7 +173,7 @@ export async function pullChanges(
 			]);
 			const merged = feeds.flat().sort((a, b) => a.seq - b.seq);
 			const page = merged.slice(0, limit);
-			const changes = page.map((s) => s.change as Change);
+			const changes = page.map((s) => s.change);
 			return {
 				changes,
 				cursor: page.length > 0 ? page[page.length - 1].seq : since,

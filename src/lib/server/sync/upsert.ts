@@ -8,12 +8,13 @@ import type { MutationResult, UpsertMutation } from '../../schemas/sync';
 import { assetForCapture } from '../assets';
 import { assets, findings } from '../db/schema';
 import type { Tx } from '../db/types';
+import { captureColumns } from '../walk/capture-row';
 import { lockFinding } from './lock';
 import { captureKey } from './canonical';
 import type { PushContext, PushSurvey } from './context';
 import { nextChangeSeq } from './counter';
 import { auditFinding, keepConflict } from './journal';
-import { misplaced, priceCapture, siteFacts } from './price';
+import { misplaced, priceCapture, siteFactsOnce } from './price';
 
 const EDITED_ELSEWHERE =
 	'Someone changed this finding on the server after this device last had it: the server kept ' +
@@ -34,16 +35,7 @@ export async function applyUpsert(
 		status: 'rejected',
 		reason
 	});
-	let facts = ctx.sites.get(survey.siteId);
-	if (!facts) {
-		// A failed read is not kept: the retried mutation reads again.
-		facts = siteFacts(tx, survey.siteId).catch((e: unknown) => {
-			ctx.sites.delete(survey.siteId);
-			throw e;
-		});
-		ctx.sites.set(survey.siteId, facts);
-	}
-	const site = await facts;
+	const site = await siteFactsOnce(tx, ctx.sites, survey.siteId);
 	const wrongPlace = misplaced(site, c);
 	if (wrongPlace) return rejected(wrongPlace);
 
@@ -69,18 +61,9 @@ export async function applyUpsert(
 		await tx.update(assets).set({ changeSeq }).where(eq(assets.id, asset.id));
 	}
 	const values = {
-		kind: c.kind,
-		assetId: asset?.id ?? null,
-		headerId: c.headerId ?? null,
-		areaId: c.areaId ?? null,
-		location: c.location,
-		notes: c.notes,
-		photoIds: c.photoIds,
-		inputs: c.inputs as Record<string, unknown>,
+		...captureColumns(c, asset?.id ?? null),
 		results: priced.results,
 		resultsEngine: priced.engine,
-		recordedAt: new Date(c.createdAt),
-		capturedAt: new Date(c.updatedAt),
 		changeSeq
 	};
 	const version = (row?.version ?? 0) + 1;

@@ -47,3 +47,22 @@ export function captureFromRow(row: CaptureColumns): FindingCapture {
 		updatedAt: updatedAt.toISOString()
 	});
 }
+
+/**
+ * The other way: the `findings` columns a capture is stored in (the sync push and the demo seed
+ * write a capture the same way, so captureFromRow reads back exactly what was sent).
+ */
+export function captureColumns(c: FindingCapture, assetId: string | null) {
+	return {
+		kind: c.kind,
+		assetId,
+		headerId: c.headerId ?? null,
+		areaId: c.areaId ?? null,
+		location: c.location,
+		notes: c.notes,
+		photoIds: c.photoIds,
+		inputs: c.inputs as Record<string, unknown>,
+		recordedAt: new Date(c.createdAt),
+		capturedAt: new Date(c.updatedAt)
+	};
+}

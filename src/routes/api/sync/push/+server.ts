@@ -2,6 +2,7 @@ import { error } from '@sveltejs/kit';
 import { db } from '$lib/server/db';
 import { requireRole, requireSurveyAccess } from '$lib/server/policy';
 import { readJsonBody } from '$lib/server/sync/body';
+import { surveyOf } from '$lib/server/sync/apply';
 import { applyPush, pushSurveys } from '$lib/server/sync/push';
 import { privateJson } from '$lib/server/walk/respond';
 import { MAX_PUSH_BYTES, pushRequestSchema } from '$lib/schemas/sync';
@@ -25,7 +26,7 @@ export const POST: RequestHandler = async (event) => {
 	}
 	const request = parsed.data;
 	const surveys = await pushSurveys(db, user.firmId, request);
-	for (const id of new Set(request.mutations.map((m) => m.data.surveyId))) {
+	for (const id of new Set(request.mutations.map(surveyOf))) {
 		if (!surveys.has(id)) error(404, 'Not found.');
 		await requireSurveyAccess(user, id, 'write');
 	}
