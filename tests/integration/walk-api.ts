@@ -4,7 +4,24 @@ import { GET as me } from '../../src/routes/api/me/+server';
 import { GET as surveys } from '../../src/routes/api/surveys/+server';
 import { GET as snapshot } from '../../src/routes/api/surveys/[id]/snapshot/+server';
 
-type Handler = (event: never) => Response | Promise<Response>;
+export type Handler = (event: never) => Response | Promise<Response>;
+
+/** The event SvelteKit hands a route handler after its hooks, for one signed-in person. */
+export function routeEvent(
+	user: SessionUser | null,
+	routeId: string,
+	request: Request,
+	params: Record<string, string> = {}
+) {
+	return {
+		locals: { user, session: null },
+		params,
+		url: new URL(request.url),
+		request,
+		route: { id: routeId },
+		getClientAddress: () => '127.0.0.1'
+	};
+}
 
 export async function call(
 	handler: Handler,
@@ -14,15 +31,7 @@ export async function call(
 	params: Record<string, string> = {},
 	init?: RequestInit
 ): Promise<{ status: number; body: unknown; headers: Headers }> {
-	const url = new URL(`http://127.0.0.1${path}`);
-	const event = {
-		locals: { user, session: null },
-		params,
-		url,
-		request: new Request(url, init),
-		route: { id: routeId },
-		getClientAddress: () => '127.0.0.1'
-	};
+	const event = routeEvent(user, routeId, new Request(`http://127.0.0.1${path}`, init), params);
 	try {
 		const res = await handler(event as never);
 		return { status: res.status, body: await res.json(), headers: res.headers };

@@ -7,9 +7,8 @@
 import { isHttpError } from '@sveltejs/kit';
 import { GET as pull } from '../../../src/routes/api/sync/pull/+server';
 import { POST as push } from '../../../src/routes/api/sync/push/+server';
+import { routeEvent, type Handler } from '../walk-api';
 import type { Fetch } from './faulty-fetch';
-
-type Handler = (event: never) => Response | Promise<Response>;
 
 const photoRoute: Record<string, unknown> =
 	await import('../../../src/routes/api/photos/[id]/+server').catch(() => ({}));
@@ -31,16 +30,8 @@ export function appFetch(user: SessionUser): Fetch {
 		const found = route(request.method, url.pathname);
 		if (!found) return Response.json({ message: 'Not found.' }, { status: 404 });
 		const [handler, id, params] = found;
-		const event = {
-			locals: { user, session: null },
-			params,
-			url,
-			request,
-			route: { id },
-			getClientAddress: () => '127.0.0.1'
-		};
 		try {
-			return await handler(event as never);
+			return await handler(routeEvent(user, id, request, params) as never);
 		} catch (e) {
 			if (isHttpError(e)) return Response.json(e.body, { status: e.status });
 			return Response.json({ message: 'Internal Error' }, { status: 500 });
