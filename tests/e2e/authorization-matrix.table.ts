@@ -11,55 +11,21 @@
  * 'signin' means a redirect to the sign-in page. Requests that change data must be harmless to
  * repeat (they run once per role and tenant).
  */
-import type { Role } from '../../src/lib/schemas/roles';
-import type { Tenant } from './support/tenants';
+import { deskAreaMatrix } from './authorization-matrix.desk-areas';
+import { deskReviewMatrix } from './authorization-matrix.desk-review';
+import { deskSurveysMatrix } from './authorization-matrix.desk-surveys';
+import {
+	type Case,
+	deskAction,
+	deskPage,
+	every,
+	mine,
+	signedIn,
+	walkShell
+} from './support/matrix-kit';
 
-export type Who = 'anonymous' | Role;
-export type Outcome = 200 | 303 | 400 | 401 | 403 | 404 | 405 | 409 | 410 | 'signin';
-export type Expectation = Outcome | { own: Outcome; other: Outcome };
+export type { Case, Expectation, Outcome, Who } from './support/matrix-kit';
 
-export interface Case {
-	request?: (t: Tenant) => { path?: string; form?: Record<string, string> };
-	expect: Record<Who, Expectation>;
-	/** The request ends the session it is made with (sign-out): the runner uses a spare one. */
-	endsSessions?: boolean;
-}
-
-const every = (o: Expectation): Record<Who, Expectation> => ({
-	anonymous: o,
-	admin: o,
-	consultant: o,
-	auditor: o,
-	client: o
-});
-const signedIn = (o: Expectation, anonymous: Outcome): Record<Who, Expectation> => ({
-	...every(o),
-	anonymous
-});
-const deskPage: Record<Who, Expectation> = {
-	anonymous: 'signin',
-	admin: 200,
-	consultant: 200,
-	auditor: 403,
-	client: 403
-};
-/** A Desk action on one of the firm's people or invitations: 404 across tenants. */
-const deskAction = (admin: Expectation, consultant: Expectation): Record<Who, Expectation> => ({
-	anonymous: 401,
-	admin,
-	consultant,
-	auditor: 403,
-	client: 403
-});
-const mine = { own: 200, other: 404 } as const;
-/** A page of the Walk beyond its prerendered start page: the hooks' gate for the Walk. */
-const walkShell: Record<Who, Expectation> = {
-	anonymous: 'signin',
-	admin: 200,
-	consultant: 200,
-	auditor: 200,
-	client: 403
-};
 const unknownFinding = '00000000-0000-4000-8000-000000000000';
 
 /** 43 characters of the token alphabet that no link ever carried. */
@@ -206,6 +172,10 @@ export const matrix: Record<string, Record<string, Case>> = {
 			expect: signedIn(404, 401)
 		}
 	},
+
+	...deskAreaMatrix,
+	...deskSurveysMatrix,
+	...deskReviewMatrix,
 
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }

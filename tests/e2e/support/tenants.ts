@@ -26,6 +26,8 @@ export interface Tenant {
 	users: DemoUser[];
 	clientId: string;
 	otherClientId: string;
+	/** The demo site of the demo client (the field survey's site). */
+	siteId: string;
 	/** The demo survey in the field (the tenant's auditor is assigned to it). */
 	surveyId: string;
 	targetUserId: string;
@@ -133,6 +135,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		users,
 		clientId: client.id,
 		otherClientId: ids.otherClient,
+		siteId: site.id,
 		surveyId: survey.id,
 		targetUserId: ids.target,
 		invitationId: ids.invitation,
