@@ -142,6 +142,12 @@ export const costBasisSchema = z
 		feedwaterTemperature: temperatureSchema('Feedwater temperature', 273.15, 523.15),
 		/** Share of the steam's mass that comes back as condensate, [0, 1]. */
 		condensateReturnFraction: fraction('Condensate return fraction'),
+		/** Makeup (cold) water temperature, K; when set, unreturned water is charged its heating. */
+		makeupWaterTemperature: temperatureSchema(
+			'Makeup water temperature',
+			273.15,
+			373.15
+		).optional(),
 		/** Makeup water price per m³, in the cost basis currency. */
 		makeupWaterPrice: decimalStringSchema,
 		/** Water treatment (chemicals, softening, blowdown) per m³ of makeup water. */
@@ -206,7 +212,13 @@ export const headerSchema = z.object({
 	/** Line pressure, MPa absolute (the Desk converts from gauge with the site's atmosphere). */
 	pressure: pressureSchema('Header pressure', 22),
 	/** Design steam temperature for superheated headers, K; absent for saturated headers. */
-	designTemperature: temperatureSchema('Design temperature', 273.16, 1073.15).optional()
+	designTemperature: temperatureSchema('Design temperature', 273.16, 1073.15).optional(),
+	/** Hours per year this header is live, where it differs from the site's. */
+	operatingHours: z
+		.number({ error: 'Header operating hours must be a number of hours per year' })
+		.gt(0, { error: 'Header operating hours must be greater than 0 h per year' })
+		.max(8784, { error: 'Header operating hours cannot exceed 8784 h per year (a leap year)' })
+		.optional()
 });
 export type Header = z.infer<typeof headerSchema>;
 const _header: Agrees<typeof headerSchema, EngineHeader> = true;

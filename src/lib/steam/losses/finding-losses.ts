@@ -1,36 +1,49 @@
 /**
- * Each kind of finding turned into the flows the energy chain prices: steam and condensate
- * lost, heat lost, makeup water, plus notes, risk and the assumptions behind them.
+ * Each kind of finding turned into its physics: the steam and condensate it loses (with their
+ * enthalpies) or the heat it loses at the surface, plus notes, risk and the assumptions behind
+ * them. Nothing here reads the money side of the cost basis (fuel, efficiency, feedwater,
+ * return, hours): ./pricing.ts turns these flows into fuel, cost, CO2 and water, so a change of
+ * cost basis re-prices a stored physics result without recomputing it.
  */
 import { saturationTemperature } from '../region4';
 import { saturatedLiquid } from '../saturation';
-import { condensateHeatRate, steamHeatRate } from './energy-chain';
 import { coldInletNote, surfaceStateNote } from './field-readings';
 import { type HeaderReading, readHeader, SATURATION_TOLERANCE } from './header';
 import type {
-	CostBasis,
 	Header,
 	HeaderFindingInput,
 	InsulationFindingInput,
 	LeakFindingInput,
+	TrapFactors,
 	TrapFindingInput
 } from './inputs';
 import { type InsulationGap, insulationGap } from './insulation';
 import { leakSteamLoss } from './leaks';
 import type { OrificeFlow } from './orifice';
-import { findHeader, headerSteam, type ResolvedBasis } from './site-basis';
+import { findHeader, headerSteam } from './site-basis';
 import type { Assumption } from './sourced';
 import { trapSteamLoss } from './traps';
 
 export interface LossCore {
 	/** Steam lost, kg/s; null when the finding is not a loss of steam (heat, readings). */
 	steamFlow: number | null;
-	/** Heat the boiler must replace, W. */
-	heatRate: number;
-	/** Water to make up, kg/s. */
-	makeupFlow: number;
-	/** Hours per year this loss runs. */
-	hours: number;
+	/** Specific enthalpy of the lost steam (at its header), kJ/kg; null with no steam lost. */
+	steamEnthalpy: number | null;
+	/**
+	 * Whether lost steam passes into the condensate return (a trap discharging to a return
+	 * line), so the site's condensate return share of it comes back as water.
+	 */
+	returnable: boolean;
+	/** Hot condensate discharged to drain, kg/s. */
+	condensateFlow: number;
+	/** Saturated-liquid enthalpy of that condensate, kJ/kg; null with none. */
+	condensateEnthalpy: number | null;
+	/** Heat lost from a surface (or saved by insulating it), W. */
+	surfaceHeat: number;
+	/** Hours per year this loss runs when the finding or its header says so; null: the site's. */
+	hours: number | null;
+	/** Where `hours` came from; null with no override. */
+	hoursSource: string | null;
 	riskNote: string | null;
 	notes: string[];
 	assumptions: Assumption[];
@@ -41,10 +54,20 @@ export interface LossCore {
 	reading: HeaderReading | null;
 }
 
-interface Context {
-	basis: ResolvedBasis;
-	costBasis: CostBasis;
+export interface PhysicsContext {
+	/** Site atmospheric pressure, MPa absolute. */
+	atmosphere: number;
+	trapFactors: TrapFactors | undefined;
 	headers: readonly Header[];
+}
+
+/** The finding's own hours, else its header's, else none (the site's hours then apply). */
+function hoursOf(own: number | undefined, header: Header | null) {
+	if (own !== undefined) return { hours: own, hoursSource: 'finding (override)' };
+	if (header?.operatingHours !== undefined) {
+		return { hours: header.operatingHours, hoursSource: `header list (${header.name})` };
+	}
+	return { hours: null, hoursSource: null };
 }
 
 function headerAssumptions(header: Header, enthalpy: number): Assumption[] {
@@ -68,7 +91,7 @@ function headerAssumptions(header: Header, enthalpy: number): Assumption[] {
 
 export function trapLoss(
 	finding: TrapFindingInput,
-	{ basis, costBasis, headers }: Context
+	{ atmosphere, trapFactors, headers }: PhysicsContext
 ): LossCore {
 	const inputs = finding.inputs;
 	const header = findHeader(headers, finding.headerId);
@@ -77,17 +100,13 @@ export function trapLoss(
 		inputs,
 		inletPressure: steam.pressure,
 		inletTemperature: steam.temperature,
-		atmosphere: basis.atmosphere,
-		factors: costBasis.trapFactors
+		atmosphere,
+		factors: trapFactors
 	});
 	const toDrain = inputs.discharge === 'atmosphere';
 	const passing = ['working', 'leaking', 'failed-open'].includes(inputs.condition);
 	const condensateFlow = toDrain && passing ? (inputs.condensateLoad ?? 0) : 0;
 	const hf = saturatedLiquid(steam.pressure).h;
-	const heatRate =
-		steamHeatRate(loss.steamFlow, steam.enthalpy, basis.feedwaterEnthalpy) +
-		condensateHeatRate(condensateFlow, hf, basis.feedwaterEnthalpy);
-	const returned = toDrain ? 0 : basis.condensateReturnFraction;
 	const notes = [loss.note].filter((n): n is string => n !== null);
 	const assumptions = [...headerAssumptions(header, steam.enthalpy), ...loss.assumptions];
 	const cold = coldInletNote(inputs, steam.saturationTemperature);
@@ -105,20 +124,14 @@ export function trapLoss(
 			source: 'finding'
 		});
 	}
-	if (!toDrain && loss.steamFlow > 0) {
-		assumptions.push({
-			key: 'condensateReturnFraction',
-			label: 'Share of blown-through steam recovered in the return',
-			value: returned,
-			unit: '',
-			source: 'site cost basis (condensate return fraction)'
-		});
-	}
 	return {
 		steamFlow: loss.steamFlow,
-		heatRate,
-		makeupFlow: loss.steamFlow * (1 - returned) + condensateFlow,
-		hours: inputs.operatingHours ?? basis.hours,
+		steamEnthalpy: steam.enthalpy,
+		returnable: !toDrain,
+		condensateFlow,
+		condensateEnthalpy: condensateFlow > 0 ? hf : null,
+		surfaceHeat: 0,
+		...hoursOf(inputs.operatingHours, header),
 		riskNote: loss.riskNote,
 		notes,
 		assumptions,
@@ -130,15 +143,21 @@ export function trapLoss(
 	};
 }
 
-export function leakLoss(finding: LeakFindingInput, { basis, headers }: Context): LossCore {
+export function leakLoss(
+	finding: LeakFindingInput,
+	{ atmosphere, headers }: PhysicsContext
+): LossCore {
 	const header = findHeader(headers, finding.headerId);
 	const steam = headerSteam(header);
-	const loss = leakSteamLoss(finding.inputs, steam.pressure, basis.atmosphere, steam.temperature);
+	const loss = leakSteamLoss(finding.inputs, steam.pressure, atmosphere, steam.temperature);
 	return {
 		steamFlow: loss.steamFlow,
-		heatRate: steamHeatRate(loss.steamFlow, steam.enthalpy, basis.feedwaterEnthalpy),
-		makeupFlow: loss.steamFlow,
-		hours: finding.inputs.operatingHours ?? basis.hours,
+		steamEnthalpy: steam.enthalpy,
+		returnable: false,
+		condensateFlow: 0,
+		condensateEnthalpy: null,
+		surfaceHeat: 0,
+		...hoursOf(finding.inputs.operatingHours, header),
 		riskNote: null,
 		notes: [loss.note],
 		assumptions: [...headerAssumptions(header, steam.enthalpy), ...loss.assumptions],
@@ -152,11 +171,12 @@ export function leakLoss(finding: LeakFindingInput, { basis, headers }: Context)
 
 export function insulationLoss(
 	finding: InsulationFindingInput,
-	{ basis, headers }: Context
+	{ headers }: PhysicsContext
 ): LossCore {
 	const inputs = finding.inputs;
 	const assumptions: Assumption[] = [];
 	let process = inputs.processTemperature;
+	const listed = headers.find((h) => h.id === finding.headerId) ?? null;
 	if (process === undefined) {
 		const header = findHeader(headers, finding.headerId);
 		const steam = headerSteam(header);
@@ -193,9 +213,12 @@ export function insulationLoss(
 	}
 	return {
 		steamFlow: null,
-		heatRate: gap.saving,
-		makeupFlow: 0,
-		hours: inputs.operatingHours ?? basis.hours,
+		steamEnthalpy: null,
+		returnable: false,
+		condensateFlow: 0,
+		condensateEnthalpy: null,
+		surfaceHeat: gap.saving,
+		...hoursOf(inputs.operatingHours, listed),
 		riskNote: gap.before.burnRisk
 			? 'Bare surface above the contact burn threshold: a burn hazard until insulated.'
 			: null,
@@ -212,7 +235,10 @@ export function insulationLoss(
 /** Relative departure from the listed header pressure worth reporting (common practice). */
 const PRESSURE_DEVIATION = 0.1;
 
-export function headerLoss(finding: HeaderFindingInput, { basis, headers }: Context): LossCore {
+export function headerLoss(
+	finding: HeaderFindingInput,
+	{ atmosphere, headers }: PhysicsContext
+): LossCore {
 	const header = findHeader(headers, finding.headerId);
 	const { measuredPressure, measuredTemperature } = finding.inputs;
 	const reading = readHeader(measuredPressure, measuredTemperature);
@@ -220,8 +246,8 @@ export function headerLoss(finding: HeaderFindingInput, { basis, headers }: Cont
 		reading.note,
 		'A header reading records conditions: it carries no loss of its own.'
 	];
-	const listedGauge = header.pressure - basis.atmosphere;
-	const measuredGauge = measuredPressure - basis.atmosphere;
+	const listedGauge = header.pressure - atmosphere;
+	const measuredGauge = measuredPressure - atmosphere;
 	if (listedGauge > 0 && Math.abs(measuredGauge - listedGauge) > PRESSURE_DEVIATION * listedGauge) {
 		notes.push(
 			`Running at ${measuredGauge.toFixed(3)} MPa gauge against the listed ${listedGauge.toFixed(3)} MPa gauge for "${header.name}".`
@@ -236,9 +262,13 @@ export function headerLoss(finding: HeaderFindingInput, { basis, headers }: Cont
 	}
 	return {
 		steamFlow: null,
-		heatRate: 0,
-		makeupFlow: 0,
-		hours: basis.hours,
+		steamEnthalpy: null,
+		returnable: false,
+		condensateFlow: 0,
+		condensateEnthalpy: null,
+		surfaceHeat: 0,
+		hours: null,
+		hoursSource: null,
 		riskNote,
 		notes,
 		assumptions: [

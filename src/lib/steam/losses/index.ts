@@ -18,6 +18,8 @@ export {
 	steamHeatRate
 } from './energy-chain';
 export { type FindingEvaluation, type SiteInput, evaluateFinding } from './evaluate';
+export { type FindingPhysics, type PhysicsSite, findingPhysics } from './physics';
+export { priceFinding } from './pricing';
 export {
 	type InsulatedFlatHeatLoss,
 	type InsulatedFlatInput,
@@ -59,6 +61,7 @@ export type {
 	InsulationMaterialInput,
 	LeakFindingInput,
 	LeakInputs,
+	PhysicsBasis,
 	TrapFactors,
 	TrapFindingInput,
 	TrapInputs

@@ -157,6 +157,11 @@ export interface CostBasis {
 	waterTreatmentPrice: string;
 	/** Hours per year the steam system is live. */
 	operatingHours: number;
+	/**
+	 * Makeup water temperature, K. When given, water that is not returned is also charged the
+	 * heat that raises makeup from this temperature to feedwater temperature.
+	 */
+	makeupWaterTemperature?: number;
 	/** kg CO2 per GJ of fuel (HHV). */
 	emissionFactor?: number;
 	/** MPa absolute; wins over elevation. */
@@ -177,4 +182,9 @@ export interface Header {
 	pressure: number;
 	/** Design steam temperature for superheated headers, K. */
 	designTemperature?: number;
+	/** Hours per year this header is live, where it differs from the site's (0, 8784]. */
+	operatingHours?: number;
 }
+
+/** The part of a site that moves a finding's physics (steam flow, heat flow), not its money. */
+export type PhysicsBasis = Pick<CostBasis, 'atmosphericPressure' | 'elevation' | 'trapFactors'>;
