@@ -1,5 +1,4 @@
 import { fail, redirect } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { homeFor, safeNext, signInSchema } from '$lib/schemas/account';
 import { roleSchema } from '$lib/schemas/roles';
 import {
@@ -13,8 +12,7 @@ import { tooManyMessage } from '$lib/server/auth/limits';
 import { lucia } from '$lib/server/auth/lucia';
 import { verifyPassword } from '$lib/server/auth/password';
 import { startSession } from '$lib/server/auth/sessions';
-import { db } from '$lib/server/db';
-import { users } from '$lib/server/db/schema';
+import { accountForSignIn, noteSignIn } from '$lib/server/auth/sign-in';
 import { readForm } from '$lib/server/forms';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -53,7 +51,7 @@ export const actions: Actions = {
 			{ scope: 'sign-in:address', subject: address }
 		] as const;
 
-		const [user] = await db.select().from(users).where(eq(users.email, email)).limit(1);
+		const user = await accountForSignIn(email);
 		const subject = {
 			firmId: user?.firmId ?? null,
 			subjectId: user?.id ?? null,
@@ -77,7 +75,7 @@ export const actions: Actions = {
 		// A fresh session id on every sign-in; any session this browser had ends (no fixation).
 		if (locals.session) await lucia.invalidateSession(locals.session.id);
 		await startSession(cookies, user.id, request.headers.get('user-agent'));
-		await db.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, user.id));
+		await noteSignIn(user.id);
 		await auditAuth({ ...subject, action: 'sign-in', actorId: user.id });
 		// Housekeeping that needs no scheduler: old counters and expired sessions go now and then.
 		await pruneAttempts();

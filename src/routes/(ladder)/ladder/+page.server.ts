@@ -1,7 +1,5 @@
-import { and, desc, eq, isNotNull } from 'drizzle-orm';
-import { db } from '$lib/server/db';
-import { sites, surveys } from '$lib/server/db/schema';
-import { requireRole, surveyScope } from '$lib/server/policy';
+import { publishedSurveys } from '$lib/server/ladder';
+import { requireRole } from '$lib/server/policy';
 import type { PageServerLoad } from './$types';
 
 /**
@@ -10,16 +8,5 @@ import type { PageServerLoad } from './$types';
  */
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, 'ladder.open');
-	const rows = await db
-		.select({
-			id: surveys.id,
-			name: surveys.name,
-			site: sites.name,
-			publishedAt: surveys.publishedAt
-		})
-		.from(surveys)
-		.innerJoin(sites, eq(sites.id, surveys.siteId))
-		.where(and(surveyScope(user), isNotNull(surveys.publishedAt)))
-		.orderBy(desc(surveys.publishedAt));
-	return { surveys: rows };
+	return { surveys: await publishedSurveys(user) };
 };
