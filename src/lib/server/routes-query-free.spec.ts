@@ -1,5 +1,5 @@
 /**
- * The rule "data access per aggregate" (DEVELOPERS.md, Conventions): no route file queries the
+ * The rule "data access per aggregate" (DEVELOPERS.md, "Forms"): no route file queries the
  * database itself. Routes call data functions in src/lib/server; those own every query. This
  * spec reads every file under src/routes and fails on an import of Drizzle, mysql2 or the
  * database module (client or tables), and on a Drizzle query written in a route.

@@ -1,4 +1,5 @@
 import {
+	char,
 	double,
 	index,
 	int,
@@ -8,8 +9,9 @@ import {
 	uniqueIndex,
 	varchar
 } from 'drizzle-orm/mysql-core';
+import type { CostBasis } from '../../../schemas/site';
 import { at, changeSeq, createdAt, id, updatedAt, uuid, version, word } from './columns';
-import { clientCompanies, firms } from './tenancy';
+import { clientCompanies, firms, users } from './tenancy';
 
 /** A plant (or one part of it) of a client company. */
 export const sites = mysqlTable(
@@ -24,14 +26,16 @@ export const sites = mysqlTable(
 			.references(() => clientCompanies.id),
 		name: varchar('name', { length: 160 }).notNull(),
 		address: text('address'),
+		/** m above sea level; gives the atmosphere for gauge readings when none is measured. */
 		elevation: double('elevation_m'),
-		/**
-		 * The site's cost basis: fuel, price, boiler efficiency, feedwater temperature,
-		 * condensate return, water and treatment cost, operating hours, emission factor,
-		 * currency, atmospheric pressure. Shape and units: $lib/schemas/site (costBasisSchema);
-		 * prices inside are decimal strings, never floats.
-		 */
-		costBasis: json('cost_basis').$type<Record<string, unknown>>(),
+		/** Measured atmospheric pressure, MPa absolute; wins over elevation. */
+		atmosphericPressure: double('atmospheric_pressure_mpa'),
+		/** SI | US: the units the site's figures are entered and shown in. */
+		unitSystem: char('unit_system', { length: 2 }).notNull().default('SI'),
+		/** ISO 4217: the currency of the site's current cost basis (and of its figures). */
+		currency: char('currency', { length: 3 }).notNull().default('EUR'),
+		/** The site's current cost basis (a row of cost_bases); null until one is saved. */
+		costBasisId: uuid('cost_basis_id'),
 		version: version(),
 		changeSeq: changeSeq(),
 		createdAt: createdAt(),
@@ -42,6 +46,29 @@ export const sites = mysqlTable(
 		index('sites_client_idx').on(t.clientCompanyId),
 		index('sites_change_idx').on(t.firmId, t.changeSeq)
 	]
+);
+
+/**
+ * Every cost basis a site has had, numbered from 1: saving a new one never changes an old one,
+ * so a published survey keeps the basis it was priced on and every figure names the basis that
+ * priced it. `basis` is costBasisSchema's shape ($lib/schemas/site; prices as decimal strings)
+ * without the site's own atmosphere, which lives on the site.
+ */
+export const costBases = mysqlTable(
+	'cost_bases',
+	{
+		id: id(),
+		siteId: uuid('site_id')
+			.notNull()
+			.references(() => sites.id),
+		number: int('number').notNull(),
+		basis: json('basis').$type<CostBasis>().notNull(),
+		/** Why it changed, in the consultant's words. */
+		note: varchar('note', { length: 255 }),
+		createdBy: uuid('created_by').references(() => users.id),
+		createdAt: createdAt()
+	},
+	(t) => [uniqueIndex('cost_bases_site_number_uq').on(t.siteId, t.number)]
 );
 
 /** The site's steam pressure levels; findings pick one instead of typing a pressure. */
@@ -57,6 +84,8 @@ export const headers = mysqlTable(
 		pressure: double('pressure_mpa').notNull(),
 		/** Engine base units: K; set for superheated headers. */
 		designTemperature: double('design_temperature_k'),
+		/** Hours per year the header is live where it differs from the site's; null: the site's. */
+		operatingHours: double('operating_hours'),
 		sortOrder: int('sort_order').notNull().default(0),
 		retiredAt: at('retired_at'),
 		version: version(),
@@ -118,3 +147,4 @@ export const assets = mysqlTable(
 );
 
 export type AssetRow = typeof assets.$inferSelect;
+export type CostBasisRow = typeof costBases.$inferSelect;

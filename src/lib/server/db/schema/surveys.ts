@@ -1,5 +1,6 @@
 import {
 	date,
+	double,
 	index,
 	int,
 	json,
@@ -8,8 +9,9 @@ import {
 	text,
 	varchar
 } from 'drizzle-orm/mysql-core';
+import type { FindingPhysics } from '../../../steam/losses/physics';
 import { at, changeSeq, createdAt, id, money, updatedAt, uuid, version, word } from './columns';
-import { areas, assets, headers, sites } from './sites';
+import { areas, assets, costBases, headers, sites } from './sites';
 import { firms, users } from './tenancy';
 
 /** One visit to a site by one or more auditors. */
@@ -29,6 +31,14 @@ export const surveys = mysqlTable(
 		/** planned | in-field | in-review | published | closed */
 		status: word('status').notNull().default('planned'),
 		publishedAt: at('published_at'),
+		/**
+		 * The cost basis the survey is priced on once published (frozen); null: the site's current
+		 * basis, so the figures follow the site while the survey is being worked on.
+		 */
+		costBasisId: uuid('cost_basis_id').references(() => costBases.id),
+		/** When a consultant finished checking every finding (the survey is ready to publish). */
+		reviewedAt: at('reviewed_at'),
+		reviewedBy: uuid('reviewed_by').references(() => users.id),
 		createdBy: uuid('created_by').references(() => users.id),
 		version: version(),
 		changeSeq: changeSeq(),
@@ -108,9 +118,36 @@ export const findings = mysqlTable(
 		 */
 		photoIds: json('photo_ids').$type<string[]>(),
 		inputs: json('inputs').$type<Record<string, unknown>>().notNull(),
-		results: json('results').$type<Record<string, unknown>>(),
-		/** Engine version that produced `results`, so a later engine can recompute. */
+		/** The trap's condition (or a leak's size class): the Desk filters by it. */
+		condition: word('condition'),
+		/**
+		 * What the server's engine made of the inputs and header (flows, enthalpies, state,
+		 * cautions): independent of the cost basis, so a new basis re-prices without it moving.
+		 */
+		physics: json('physics').$type<FindingPhysics>(),
+		/** Engine version that computed `physics`. */
+		physicsEngine: varchar('physics_engine', { length: 32 }),
+		/** Engine version that priced the figures below; null: not priced. */
 		resultsEngine: varchar('results_engine', { length: 32 }),
+		/** The cost basis (a row of cost_bases) the figures below were priced on. */
+		pricedBasisId: uuid('priced_basis_id').references(() => costBases.id),
+		pricedAt: at('priced_at'),
+		/** Why there are no figures (the engine refused the inputs, or the site has no basis). */
+		pricingNote: varchar('pricing_note', { length: 255 }),
+		/** Figures lists sort and total by, all per year at the site's hours. Steam lost, kg/h. */
+		steamLoss: double('steam_kg_h'),
+		/** Heat the boiler replaces, kW. */
+		heatLoss: double('heat_kw'),
+		/** Fuel energy per year, GJ. */
+		fuelEnergy: double('fuel_gj'),
+		/** Fuel and water cost per year, minor units of the basis currency. */
+		cost: money('cost_minor'),
+		/** kg CO2 per year. */
+		co2: double('co2_kg'),
+		/** Makeup water per year, m³. */
+		water: double('water_m3'),
+		/** Simple payback of the repair, years; null without a repair cost or saving. */
+		paybackYears: double('payback_years'),
 		repairCost: money('repair_cost_minor'),
 		measureId: uuid('measure_id').references(() => measures.id),
 		/** draft | reviewed | published | approved | scheduled | repaired | declined | verified */
@@ -123,6 +160,9 @@ export const findings = mysqlTable(
 		 * Desk reviews the finding, which is no change to the capture).
 		 */
 		capturedAt: at('captured_at'),
+		/** A consultant checked the capture and its figures at the Desk. */
+		reviewedAt: at('reviewed_at'),
+		reviewedBy: uuid('reviewed_by').references(() => users.id),
 		deletedAt: at('deleted_at'),
 		version: version(),
 		changeSeq: changeSeq(),
@@ -134,7 +174,10 @@ export const findings = mysqlTable(
 		index('findings_asset_idx').on(t.assetId),
 		index('findings_change_idx').on(t.surveyId, t.changeSeq),
 		// A pull reads findings of many surveys after one cursor, in counter order.
-		index('findings_seq_idx').on(t.changeSeq)
+		index('findings_seq_idx').on(t.changeSeq),
+		// The Desk's table sorts a survey's findings by these most often.
+		index('findings_survey_cost_idx').on(t.surveyId, t.cost),
+		index('findings_survey_status_idx').on(t.surveyId, t.status)
 	]
 );
 

@@ -1,4 +1,4 @@
-import { bigint, index, json, mysqlTable } from 'drizzle-orm/mysql-core';
+import { bigint, index, json, mysqlTable, primaryKey } from 'drizzle-orm/mysql-core';
 import { at, createdAt, id, uuid, word } from './columns';
 import { firms, users } from './tenancy';
 
@@ -26,7 +26,11 @@ export const findingConflicts = mysqlTable(
 		data: json('data'),
 		createdAt: createdAt(),
 		resolvedAt: at('resolved_at'),
-		resolvedBy: uuid('resolved_by').references(() => users.id)
+		resolvedBy: uuid('resolved_by').references(() => users.id),
+		/** kept-server | kept-device | merged: how the Desk settled it. */
+		resolutionKind: word('resolution_kind'),
+		/** What the Desk kept (the capture written, field by field choices), for the record. */
+		resolution: json('resolution').$type<Record<string, unknown>>()
 	},
 	(t) => [index('finding_conflicts_survey_idx').on(t.surveyId, t.findingId)]
 );
@@ -50,4 +54,25 @@ export const syncTombstones = mysqlTable(
 		createdAt: createdAt()
 	},
 	(t) => [index('sync_tombstones_change_idx').on(t.firmId, t.changeSeq)]
+);
+
+/** When each device of each person last exchanged with the server (the Desk's sync state). */
+export const syncDevices = mysqlTable(
+	'sync_devices',
+	{
+		userId: uuid('user_id')
+			.notNull()
+			.references(() => users.id),
+		deviceId: uuid('device_id').notNull(),
+		firmId: uuid('firm_id')
+			.notNull()
+			.references(() => firms.id),
+		lastPushAt: at('last_push_at'),
+		lastPullAt: at('last_pull_at'),
+		createdAt: createdAt()
+	},
+	(t) => [
+		primaryKey({ columns: [t.userId, t.deviceId] }),
+		index('sync_devices_firm_idx').on(t.firmId)
+	]
 );
