@@ -19,7 +19,7 @@ export {
 } from './energy-chain';
 export { type FindingEvaluation, type SiteInput, evaluateFinding } from './evaluate';
 export { type FindingPhysics, type PhysicsSite, findingPhysics } from './physics';
-export { priceFinding } from './pricing';
+export { type PhysicsFlows, type PricedFlows, priceFinding, priceFlows } from './pricing';
 export {
 	type InsulatedFlatHeatLoss,
 	type InsulatedFlatInput,

@@ -7,6 +7,7 @@
 import { netPresentValue, type Payback, simplePayback } from './economics';
 import {
 	annualLoss,
+	type AnnualLoss,
 	condensateHeatRate,
 	fuelPower,
 	steamFuelCostPerTonne,
@@ -20,26 +21,94 @@ import { resolveBasis, type ResolvedBasis } from './site-basis';
 import type { Assumption } from './sourced';
 import { stateFromTX } from '../saturation';
 
-/** Flows of a finding priced on one basis: heat the boiler replaces (W) and makeup (kg/s). */
-function boilerDuty(physics: FindingPhysics, basis: ResolvedBasis) {
+/** The part of a finding's physics its money depends on (the rest is notes and detail). */
+export type PhysicsFlows = Pick<
+	FindingPhysics,
+	| 'kind'
+	| 'steamFlow'
+	| 'steamEnthalpy'
+	| 'returnable'
+	| 'condensateFlow'
+	| 'condensateEnthalpy'
+	| 'surfaceHeat'
+	| 'hours'
+>;
+
+/** A finding's year on one basis: what the figures of a list are made of. */
+export interface PricedFlows {
+	/** Heat the boiler replaces, W (makeup heating included). */
+	heatRate: number;
+	/** Water made up, kg/s. */
+	makeupFlow: number;
+	/** Share of lost steam that came back with the return. */
+	returned: number;
+	/** Hours per year priced over. */
+	hours: number;
+	year: AnnualLoss;
+	makeup: { enthalpy: number; heatRate: number } | null;
+	/** Repair cost in major units, null when unknown. */
+	repair: number | null;
+	payback: Payback;
+	/** Major units, null without a discount rate, life and repair cost. */
+	npv: number | null;
+}
+
+/**
+ * Prices the flows of a finding on a resolved basis. Pure arithmetic on the flows and two
+ * saturated-liquid enthalpies, so re-pricing a whole site is cheap.
+ * @param repairCost integer minor units of the basis currency, when known
+ */
+export function priceFlows(
+	flows: PhysicsFlows,
+	basis: ResolvedBasis,
+	costBasis: CostBasis,
+	repairCost?: number
+): PricedFlows {
 	const hfw = basis.feedwaterEnthalpy;
 	const steam =
-		physics.steamFlow === null || physics.steamEnthalpy === null
+		flows.steamFlow === null || flows.steamEnthalpy === null
 			? 0
-			: steamHeatRate(physics.steamFlow, physics.steamEnthalpy, hfw);
+			: steamHeatRate(flows.steamFlow, flows.steamEnthalpy, hfw);
 	const condensate =
-		physics.condensateEnthalpy === null
+		flows.condensateEnthalpy === null
 			? 0
-			: condensateHeatRate(physics.condensateFlow, physics.condensateEnthalpy, hfw);
-	const returned = physics.returnable ? basis.condensateReturnFraction : 0;
-	const makeupFlow = (physics.steamFlow ?? 0) * (1 - returned) + physics.condensateFlow;
-	return { heatRate: steam + condensate + physics.surfaceHeat, makeupFlow, returned };
+			: condensateHeatRate(flows.condensateFlow, flows.condensateEnthalpy, hfw);
+	const returned = flows.returnable ? basis.condensateReturnFraction : 0;
+	const makeupFlow = (flows.steamFlow ?? 0) * (1 - returned) + flows.condensateFlow;
+	const makeup = makeupHeating(makeupFlow, costBasis, hfw);
+	const heatRate = steam + condensate + flows.surfaceHeat + (makeup?.heatRate ?? 0);
+	const hours = flows.hours ?? basis.hours;
+	const year = annualLoss(fuelPower(heatRate, basis.boilerEfficiency), makeupFlow, {
+		hours,
+		fuelPricePerGJ: basis.fuelPricePerGJ.value,
+		emissionFactor: basis.emissionFactor.value,
+		waterPricePerM3: basis.waterPricePerM3
+	});
+	const repair = repairCost === undefined ? null : fromMinorUnits(repairCost, basis.currency);
+	const header = flows.kind === 'header';
+	const payback: Payback = header
+		? { years: null, note: 'A header reading has no repair to pay back' }
+		: repair === null
+			? { years: null, note: 'No repair cost yet' }
+			: simplePayback(repair, year.totalCost);
+	const { discountRate, lifeYears } = costBasis;
+	const npv =
+		repair !== null && !header && discountRate !== undefined && lifeYears !== undefined
+			? netPresentValue({
+					repairCost: repair,
+					annualSaving: year.totalCost,
+					discountRate,
+					lifeYears
+				})
+			: null;
+	return { heatRate, makeupFlow, returned, hours, year, makeup, repair, payback, npv };
 }
 
 /**
  * Heat to raise makeup water from its own temperature to feedwater temperature, W (energy
  * balance on the feed tank: water not returned enters cold and is heated by the plant).
- * Zero when the basis gives no makeup temperature, or makeup arrives at or above feedwater.
+ * Null when the basis gives no makeup temperature or nothing is made up; zero heat when makeup
+ * arrives at or above feedwater temperature.
  */
 function makeupHeating(makeupFlow: number, costBasis: CostBasis, hfw: number) {
 	if (costBasis.makeupWaterTemperature === undefined || makeupFlow === 0) return null;
@@ -59,42 +128,14 @@ export function priceFinding(
 ): FindingEvaluation {
 	const basis = resolveBasis(costBasis);
 	const cb = costBasis!; // resolveBasis has thrown when it is missing
-	const duty = boilerDuty(physics, basis);
-	const makeup = makeupHeating(duty.makeupFlow, cb, basis.feedwaterEnthalpy);
-	const heatRate = duty.heatRate + (makeup?.heatRate ?? 0);
-	const hours = physics.hours ?? basis.hours;
-	const year = annualLoss(fuelPower(heatRate, basis.boilerEfficiency), duty.makeupFlow, {
-		hours,
-		fuelPricePerGJ: basis.fuelPricePerGJ.value,
-		emissionFactor: basis.emissionFactor.value,
-		waterPricePerM3: basis.waterPricePerM3
-	});
+	const priced = priceFlows(physics, basis, cb, repairCost);
+	const { year, hours } = priced;
 	const currency = basis.currency;
-	const repair = repairCost === undefined ? null : fromMinorUnits(repairCost, currency);
-	const header = physics.kind === 'header';
-	const payback: Payback = header
-		? { years: null, note: 'A header reading has no repair to pay back' }
-		: repair === null
-			? { years: null, note: 'No repair cost yet' }
-			: simplePayback(repair, year.totalCost);
-	const { discountRate, lifeYears } = cb;
-	const npv =
-		repair !== null && !header && discountRate !== undefined && lifeYears !== undefined
-			? money(
-					netPresentValue({
-						repairCost: repair,
-						annualSaving: year.totalCost,
-						discountRate,
-						lifeYears
-					}),
-					currency
-				)
-			: null;
 	return {
 		findingId: physics.findingId,
 		kind: physics.kind,
 		steamLoss: physics.steamFlow === null ? null : physics.steamFlow * 3600,
-		heatLoss: heatRate / 1000,
+		heatLoss: priced.heatRate / 1000,
 		fuelEnergy: year.fuelEnergy,
 		cost: money(year.totalCost, currency),
 		fuelCost: money(year.fuelCost, currency),
@@ -102,15 +143,15 @@ export function priceFinding(
 		co2: year.co2,
 		water: year.water,
 		operatingHours: hours,
-		repairCost: repair === null ? null : money(repair, currency),
-		payback,
-		npv,
+		repairCost: priced.repair === null ? null : money(priced.repair, currency),
+		payback: priced.payback,
+		npv: priced.npv === null ? null : money(priced.npv, currency),
 		riskNote: physics.riskNote,
 		notes: physics.notes,
 		cautions: physics.cautions,
 		assumptions: [
 			...physics.assumptions,
-			...pricedAssumptions(physics, basis, duty.returned, hours, makeup, cb)
+			...pricedAssumptions(physics, basis, priced.returned, hours, priced.makeup, cb)
 		],
 		orifice: physics.orifice,
 		insulation: physics.insulation,
@@ -126,7 +167,7 @@ function pricedAssumptions(
 	basis: ResolvedBasis,
 	returned: number,
 	hours: number,
-	makeup: ReturnType<typeof makeupHeating>,
+	makeup: PricedFlows['makeup'],
 	costBasis: CostBasis
 ): Assumption[] {
 	const out: Assumption[] = [];
