@@ -26,6 +26,7 @@ ALTER TABLE `sites` ADD `unit_system` char(2) DEFAULT 'SI' NOT NULL;--> statemen
 ALTER TABLE `sites` ADD `currency` char(3) DEFAULT 'EUR' NOT NULL;--> statement-breakpoint
 ALTER TABLE `sites` ADD `cost_basis_id` varchar(36);--> statement-breakpoint
 ALTER TABLE `findings` ADD `condition` varchar(24);--> statement-breakpoint
+ALTER TABLE `findings` ADD `flows` json;--> statement-breakpoint
 ALTER TABLE `findings` ADD `physics` json;--> statement-breakpoint
 ALTER TABLE `findings` ADD `physics_engine` varchar(32);--> statement-breakpoint
 ALTER TABLE `findings` ADD `priced_basis_id` varchar(36);--> statement-breakpoint

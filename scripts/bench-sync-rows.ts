@@ -21,7 +21,7 @@ export async function benchPullRows(n: number): Promise<number> {
 		const [priced] = await db
 			.select()
 			.from(schema.findings)
-			.where(and(eq(schema.findings.surveyId, survey.id), isNotNull(schema.findings.results)))
+			.where(and(eq(schema.findings.surveyId, survey.id), isNotNull(schema.findings.resultsEngine)))
 			.orderBy(desc(schema.findings.changeSeq))
 			.limit(1);
 		return await db.transaction(async (tx) => {
@@ -49,8 +49,7 @@ export async function benchPullRows(n: number): Promise<number> {
 						notes: '',
 						photoIds: [],
 						inputs: priced.inputs,
-						results: priced.results,
-						resultsEngine: priced.resultsEngine,
+						...figureCopy(priced),
 						recordedAt: when,
 						capturedAt: when,
 						version: 1,
@@ -68,4 +67,15 @@ export async function benchPullRows(n: number): Promise<number> {
 	} finally {
 		await pool.end();
 	}
+}
+
+/** A priced row's figure columns, copied onto a bench row. */
+function figureCopy(row: typeof schema.findings.$inferSelect) {
+	const { flows, physics, physicsEngine, resultsEngine, pricedBasisId, pricedAt, pricingNote } =
+		row;
+	const { steamLoss, heatLoss, fuelEnergy, cost, co2, water, paybackYears, condition } = row;
+	return {
+		...{ flows, physics, physicsEngine, resultsEngine, pricedBasisId, pricedAt, pricingNote },
+		...{ steamLoss, heatLoss, fuelEnergy, cost, co2, water, paybackYears, condition }
+	};
 }

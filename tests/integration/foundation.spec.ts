@@ -39,9 +39,10 @@ describe('migrations', () => {
 	it('stores money as integers, never floating point', async () => {
 		const columns = await rows<{ column_name: string; data_type: string }>(
 			sql`SELECT column_name, data_type FROM information_schema.columns
-			    WHERE table_schema = DATABASE() AND column_name LIKE '%cost%'`
+			    WHERE table_schema = DATABASE() AND column_name LIKE '%cost%'
+			      AND column_name NOT LIKE '%\\_id'`
 		);
-		expect(columns.length).toBeGreaterThan(0);
+		expect(columns.map((c) => c.column_name)).toContain('cost_minor');
 		for (const c of columns)
 			expect(['bigint', 'decimal', 'longtext', 'json']).toContain(c.data_type);
 	});
@@ -123,28 +124,22 @@ describe('demo findings', () => {
 	it('carry results computed by the shared engine from their own inputs', async () => {
 		const { evaluateFinding } = await import('../../src/lib/steam/index');
 		const { findingSchema } = await import('../../src/lib/schemas/finding');
-		const { costBasisSchema } = await import('../../src/lib/schemas/site');
+		const { pricingContext } = await import('../../src/lib/server/pricing/context');
 		const { demoFindings } = await import('../../src/lib/server/seed/findings');
 		const stored = await db.select().from(schema.findings);
 		const [site] = await db.select().from(schema.sites).where(eq(schema.sites.id, demoSites[0].id));
-		const headers = await db
-			.select()
-			.from(schema.headers)
-			.where(eq(schema.headers.siteId, site.id));
-		const costBasis = costBasisSchema.parse(site.costBasis);
+		const context = await pricingContext(db, site.id);
+		expect(context.costBasis, 'the demo site has a cost basis').not.toBeNull();
 		for (const raw of demoFindings) {
 			const row = stored.find((f) => f.id === raw.id);
 			expect(row, raw.id).toBeDefined();
-			const fresh = evaluateFinding(findingSchema.parse(raw), {
-				costBasis,
-				headers: headers.map((h) => ({ id: h.id, name: h.name, pressure: h.pressure }))
-			});
-			const results = row!.results as { cost: { minor: number }; steamLoss: number | null };
-			expect(results.cost.minor).toBe(fresh.cost.minor);
-			expect(results.steamLoss).toBe(fresh.steamLoss);
+			const fresh = evaluateFinding(findingSchema.parse(raw), context);
+			expect(row!.cost).toBe(fresh.cost.minor);
+			expect(row!.steamLoss).toBe(fresh.steamLoss);
+			expect(row!.pricedBasisId).toBe(context.basisId);
 		}
 		// At least one failed trap prices to a real loss; a failed-closed one to none.
-		const losses = stored.map((f) => (f.results as { steamLoss: number | null }).steamLoss ?? 0);
+		const losses = stored.map((f) => f.steamLoss ?? 0);
 		expect(Math.max(...losses)).toBeGreaterThan(1);
 		expect(losses).toContain(0);
 	});

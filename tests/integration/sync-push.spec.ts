@@ -90,8 +90,9 @@ describe('a new finding, its edits and its deletion', () => {
 			headers: site.headers.map(({ id, name, pressure }) => ({ id, name, pressure }))
 		});
 		expect(row.resultsEngine).toBe(ENGINE_VERSION);
-		expect(row.results?.steamLoss).toBeCloseTo(expected.steamLoss!, 9);
-		expect((row.results?.cost as { amount: number }).amount).toBeCloseTo(expected.cost.amount, 6);
+		expect(row.steamLoss).toBeCloseTo(expected.steamLoss!, 9);
+		expect(row.cost).toBe(expected.cost.minor);
+		expect(row.pricedBasisId).toBe('5e7a000b-0000-4000-8000-000000000001');
 		// The trap's tag became an asset of the site, and the finding points at it.
 		const [asset] = await db
 			.select()

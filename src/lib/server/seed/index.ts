@@ -33,7 +33,11 @@ export async function seedDemo(db: Db): Promise<void> {
 			.onDuplicateKeyUpdate(keep);
 	}
 	for (const { headers: list, ...site } of demoSites) {
-		await db.insert(sites).values(site).onDuplicateKeyUpdate(keep);
+		const firm = demoFirms.find((f) => f.id === site.firmId)!;
+		await db
+			.insert(sites)
+			.values({ ...site, unitSystem: firm.units, currency: firm.currency })
+			.onDuplicateKeyUpdate(keep);
 		for (const h of list) {
 			await db
 				.insert(headers)

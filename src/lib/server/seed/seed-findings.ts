@@ -2,9 +2,9 @@ import { and, eq, isNull, sql } from 'drizzle-orm';
 import { findingCaptureSchema } from '../../schemas/capture';
 import { findingSchema } from '../../schemas/finding';
 import type { CostBasis } from '../../schemas/site';
-import { evaluateFinding } from '../../steam/index';
-import { ENGINE_VERSION } from '../../steam/version';
 import { assetForCapture } from '../assets';
+import { pricingContext } from '../pricing/context';
+import { figureColumns } from '../pricing/figures';
 import { captureColumns } from '../walk/capture-row';
 import * as schema from '../db/schema';
 import type { Db } from '../db/types';
@@ -19,10 +19,11 @@ import {
 } from './findings';
 import { registerTrap } from './traps';
 
-const costBases: Record<string, CostBasis> = {
-	[demoSites[0].id]: creameryCostBasis,
-	[demoSites[1].id]: paperMillCostBasis
-};
+/** Each demo site's first cost basis (fixed ids, so a rerun finds them). */
+export const demoCostBases: { id: string; siteId: string; basis: CostBasis }[] = [
+	{ id: '5e7a000b-0000-4000-8000-000000000001', siteId: demoSites[0].id, basis: creameryCostBasis },
+	{ id: '5e7a000b-0000-4000-8000-000000000002', siteId: demoSites[1].id, basis: paperMillCostBasis }
+];
 
 /**
  * Cost bases (only where a site has none yet), areas, the published spring survey, and priced
@@ -31,34 +32,48 @@ const costBases: Record<string, CostBasis> = {
  * update its details only when they changed, so a second run changes nothing.
  */
 export async function seedDemoFindings(db: Db): Promise<void> {
-	const { sites, areas, surveys, findings } = schema;
-	for (const [siteId, costBasis] of Object.entries(costBases)) {
+	const { sites, areas, surveys, findings, costBases } = schema;
+	const keep = { set: { id: sql`id` } };
+	for (const { id, siteId, basis } of demoCostBases) {
+		// The site keeps its own atmosphere; the basis holds the money side.
+		const { elevation: _e, atmosphericPressure: _p, ...money } = basis;
+		await db
+			.insert(costBases)
+			.values({
+				id,
+				siteId,
+				number: 1,
+				basis: money,
+				note: 'Agreed at the kick-off meeting (demo)'
+			})
+			.onDuplicateKeyUpdate(keep);
 		await db
 			.update(sites)
-			.set({ costBasis })
-			.where(and(eq(sites.id, siteId), isNull(sites.costBasis)));
+			.set({ costBasisId: id, currency: basis.currency })
+			.where(and(eq(sites.id, siteId), isNull(sites.costBasisId)));
 	}
-	const keep = { set: { id: sql`id` } };
-	await db.insert(surveys).values(demoPublishedSurvey).onDuplicateKeyUpdate(keep);
+	// The spring survey is with the client: it keeps the basis it was priced on.
+	await db
+		.insert(surveys)
+		.values({ ...demoPublishedSurvey, costBasisId: demoCostBases[0].id })
+		.onDuplicateKeyUpdate(keep);
 	await db.insert(areas).values(demoAreas).onDuplicateKeyUpdate(keep);
 
 	const site = demoSites[0];
-	const headers = site.headers.map(({ id, name, pressure }) => ({ id, name, pressure }));
 	await db.transaction(async (tx) => {
+		const context = await pricingContext(tx, site.id);
 		for (const raw of demoFindings) {
 			const finding = findingSchema.parse(raw);
 			const capture = findingCaptureSchema.parse(captureOf(raw));
 			const newAssetId = capture.assetTag ? registerTrap(capture.assetTag).assetId : undefined;
 			const asset = await assetForCapture(tx, site.id, capture, newAssetId);
-			const results = evaluateFinding(finding, { costBasis: creameryCostBasis, headers });
 			await tx
 				.insert(findings)
 				.values({
 					...captureColumns(capture, asset?.id ?? null),
 					id: capture.id,
 					surveyId: capture.surveyId,
-					results: JSON.parse(JSON.stringify(results)),
-					resultsEngine: ENGINE_VERSION,
+					...figureColumns(context, finding),
 					repairCost: finding.repairCost ?? null,
 					status: finding.status
 				})

@@ -1,58 +1,20 @@
 /**
  * The server's own figures for a finding: the engine run on the stored capture with the site's
  * cost basis and header list (a device's numbers are never taken). A site without a valid cost
- * basis, or a capture the engine refuses, stores no results; the finding itself is kept.
+ * basis, or a capture the engine refuses, stores no figures; the finding itself is kept.
  */
-import { eq } from 'drizzle-orm';
 import type { FindingCapture } from '../../schemas/capture';
-import { costBasisSchema, type CostBasis } from '../../schemas/site';
 import type { ServerResults } from '../../schemas/sync';
-import { evaluateFinding, type Header } from '../../steam/index';
-import { ENGINE_VERSION } from '../../steam/version';
-import { areas, headers, sites } from '../db/schema';
+import { fromMinorUnits } from '../../steam/index';
 import type { Executor } from '../db/types';
-
-export interface Priced {
-	/** The engine's whole evaluation as stored in findings.results, or null. */
-	results: Record<string, unknown> | null;
-	engine: string | null;
-}
+import { pricingContext, type PricingContext } from '../pricing/context';
+import { figureColumns, type FigureColumns } from '../pricing/figures';
 
 /** What pricing and placing a capture needs from its site, read once per push. */
-export interface SiteFacts {
-	costBasis: CostBasis | null;
-	/** Every header of the site, retired ones too: a finding keeps the header it was recorded on. */
-	headers: Header[];
-	areaIds: Set<string>;
-}
+export type SiteFacts = PricingContext;
 
-export async function siteFacts(tx: Executor, siteId: string): Promise<SiteFacts> {
-	const [site] = await tx
-		.select({ costBasis: sites.costBasis })
-		.from(sites)
-		.where(eq(sites.id, siteId))
-		.limit(1);
-	const basis = costBasisSchema.safeParse(site?.costBasis);
-	const siteHeaders = await tx
-		.select({
-			id: headers.id,
-			name: headers.name,
-			pressure: headers.pressure,
-			designTemperature: headers.designTemperature
-		})
-		.from(headers)
-		.where(eq(headers.siteId, siteId));
-	const siteAreas = await tx.select({ id: areas.id }).from(areas).where(eq(areas.siteId, siteId));
-	return {
-		costBasis: basis.success ? basis.data : null,
-		headers: siteHeaders.map((h) => ({
-			id: h.id,
-			name: h.name,
-			pressure: h.pressure,
-			...(h.designTemperature === null ? {} : { designTemperature: h.designTemperature })
-		})),
-		areaIds: new Set(siteAreas.map((a) => a.id))
-	};
+export function siteFacts(tx: Executor, siteId: string): Promise<SiteFacts> {
+	return pricingContext(tx, siteId);
 }
 
 /**
@@ -87,48 +49,40 @@ export function misplaced(site: SiteFacts, c: FindingCapture): string | null {
 }
 
 /**
- * The engine run on the capture with the site's cost basis and headers. A site without a
- * valid cost basis, or a capture the engine refuses, gets no results; the finding is kept.
+ * The engine run on the capture with the site's cost basis and headers: physics and money
+ * columns. A site without a valid cost basis, or a capture the engine refuses, gets no
+ * figures (and the reason); the finding is kept.
  */
 export function priceCapture(
 	site: SiteFacts,
 	capture: FindingCapture,
 	repairCost: number | null
-): Priced {
-	if (!site.costBasis) return { results: null, engine: null };
-	try {
-		const finding = repairCost === null ? capture : { ...capture, repairCost };
-		const evaluation = evaluateFinding(finding, {
-			costBasis: site.costBasis,
-			headers: site.headers
-		});
-		return { results: JSON.parse(JSON.stringify(evaluation)), engine: ENGINE_VERSION };
-	} catch {
-		return { results: null, engine: null };
-	}
+): FigureColumns {
+	return figureColumns(site, repairCost === null ? capture : { ...capture, repairCost });
 }
 
-/** Stored figures as JSON_VALUE reads them (text, or null when absent). */
-export type StoredFigures = Record<
-	'steamLoss' | 'heatLoss' | 'fuelEnergy' | 'cost' | 'currency' | 'co2' | 'water',
-	string | null
->;
-
-/** The part of stored results a device is sent back on pull (serverResultsSchema). */
-export function figuresForDevice(f: StoredFigures, engine: string | null): ServerResults | null {
-	if (!engine || f.heatLoss === null) return null;
-	const num = (v: string | null) => {
-		const n = Number(v);
-		return v !== null && Number.isFinite(n) ? n : 0;
-	};
+/** The stored figures a device is sent back on pull (serverResultsSchema), or null. */
+export function figuresForDevice(
+	f: {
+		resultsEngine: string | null;
+		steamLoss: number | null;
+		heatLoss: number | null;
+		fuelEnergy: number | null;
+		cost: number | null;
+		co2: number | null;
+		water: number | null;
+	},
+	currency: string
+): ServerResults | null {
+	if (!f.resultsEngine || f.heatLoss === null || f.cost === null) return null;
 	return {
-		engine,
-		steamLoss: f.steamLoss === null || f.steamLoss === 'null' ? null : num(f.steamLoss),
-		heatLoss: num(f.heatLoss),
-		fuelEnergy: num(f.fuelEnergy),
-		cost: num(f.cost),
-		currency: f.currency ?? '',
-		co2: num(f.co2),
-		water: num(f.water)
+		engine: f.resultsEngine,
+		steamLoss: f.steamLoss,
+		heatLoss: f.heatLoss,
+		fuelEnergy: f.fuelEnergy ?? 0,
+		cost: fromMinorUnits(f.cost, currency),
+		currency,
+		co2: f.co2 ?? 0,
+		water: f.water ?? 0
 	};
 }

@@ -6,7 +6,7 @@
  */
 import { and, asc, eq, gt, inArray, isNull, or, sql } from 'drizzle-orm';
 import type { Change, PullResponse } from '../../schemas/sync';
-import { assets, findings, surveys, syncTombstones } from '../db/schema';
+import { assets, findings, sites, surveys, syncTombstones } from '../db/schema';
 import type { Db, Executor } from '../db/types';
 import { surveyScope } from '../policy';
 import { captureFromRow } from '../walk/capture-row';
@@ -31,23 +31,18 @@ const feedColumns = {
 	status: findings.status,
 	version: findings.version,
 	changeSeq: findings.changeSeq,
-	deletedAt: findings.deletedAt,
-	resultsEngine: findings.resultsEngine
+	deletedAt: findings.deletedAt
 };
 
-/**
- * The figures a device is sent, taken out of the stored evaluation in SQL: the evaluation also
- * holds its assumptions, cautions and notes (kilobytes per finding) that a pull never needs.
- */
-const figure = (path: string) => sql<string | null>`JSON_VALUE(${findings.results}, ${path})`;
+/** The typed figure columns a device is sent (never the JSON physics beside them). */
 const feedFigures = {
-	steamLoss: figure('$.steamLoss'),
-	heatLoss: figure('$.heatLoss'),
-	fuelEnergy: figure('$.fuelEnergy'),
-	cost: figure('$.cost.amount'),
-	currency: figure('$.cost.currency'),
-	co2: figure('$.co2'),
-	water: figure('$.water')
+	resultsEngine: findings.resultsEngine,
+	steamLoss: findings.steamLoss,
+	heatLoss: findings.heatLoss,
+	fuelEnergy: findings.fuelEnergy,
+	cost: findings.cost,
+	co2: findings.co2,
+	water: findings.water
 };
 
 type Sequenced = { seq: number; change: Change };
@@ -64,8 +59,15 @@ async function findingFeed(tx: Executor, user: SessionUser, since: number, n: nu
 		.limit(n);
 	if (page.length === 0) return [];
 	const rows = await tx
-		.select({ finding: feedColumns, figures: feedFigures, assetTag: assets.tag })
+		.select({
+			finding: feedColumns,
+			figures: feedFigures,
+			assetTag: assets.tag,
+			currency: sites.currency
+		})
 		.from(findings)
+		.innerJoin(surveys, eq(surveys.id, findings.surveyId))
+		.innerJoin(sites, eq(sites.id, surveys.siteId))
 		.leftJoin(assets, eq(assets.id, findings.assetId))
 		.where(
 			inArray(
@@ -74,7 +76,7 @@ async function findingFeed(tx: Executor, user: SessionUser, since: number, n: nu
 			)
 		)
 		.orderBy(asc(findings.changeSeq));
-	return rows.map(({ finding: f, figures, assetTag }): Sequenced => {
+	return rows.map(({ finding: f, figures, assetTag, currency }): Sequenced => {
 		const deleted = f.deletedAt !== null;
 		return {
 			seq: f.changeSeq,
@@ -88,7 +90,7 @@ async function findingFeed(tx: Executor, user: SessionUser, since: number, n: nu
 					: {
 							capture: captureFromRow({ ...f, assetTag }),
 							status: f.status as never,
-							results: figuresForDevice(figures, f.resultsEngine)
+							results: figuresForDevice(figures, currency)
 						}
 			}
 		};

@@ -62,8 +62,7 @@ export async function applyUpsert(
 	}
 	const values = {
 		...captureColumns(c, asset?.id ?? null),
-		results: priced.results,
-		resultsEngine: priced.engine,
+		...priced,
 		changeSeq
 	};
 	const version = (row?.version ?? 0) + 1;

@@ -62,7 +62,15 @@ export function captureColumns(c: FindingCapture, assetId: string | null) {
 		notes: c.notes,
 		photoIds: c.photoIds,
 		inputs: c.inputs as Record<string, unknown>,
+		condition: conditionOf(c),
 		recordedAt: new Date(c.createdAt),
 		capturedAt: new Date(c.updatedAt)
 	};
+}
+
+/** What the Desk filters a finding's condition by: a trap's condition, a leak's size class. */
+export function conditionOf(c: FindingCapture): string | null {
+	if (c.kind === 'trap') return c.inputs.condition;
+	if (c.kind === 'leak') return c.inputs.sizeClass ?? null;
+	return null;
 }

@@ -4,8 +4,8 @@
  * from that cursor brings exactly what changed after these rows were read.
  * Authorization is the caller's (route: requireRole + requireSurveyAccess).
  */
-import { and, asc, eq, isNull } from 'drizzle-orm';
-import { costBasisSchema, type CostBasis } from '../../schemas/site';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
+import type { CostBasis } from '../../schemas/site';
 import {
 	surveySnapshotSchema,
 	trapAssetDetailsSchema,
@@ -16,12 +16,14 @@ import {
 	assets,
 	changeCounters,
 	clientCompanies,
+	costBases,
 	findings,
 	headers,
 	sites,
 	surveys
 } from '../db/schema';
 import type { Db, Tx } from '../db/types';
+import { engineBasis, type SiteAtmosphere } from '../pricing/context';
 import { captureFromRow } from './capture-row';
 import { lastResults } from './last-results';
 import { unitSystemOf } from './person';
@@ -60,11 +62,16 @@ async function read(tx: Tx, user: Pick<SessionUser, 'id'>, surveyId: string) {
 			name: sites.name,
 			address: sites.address,
 			elevation: sites.elevation,
+			atmosphericPressure: sites.atmosphericPressure,
 			clientName: clientCompanies.name,
-			costBasis: sites.costBasis
+			costBasis: costBases.basis
 		})
 		.from(sites)
 		.innerJoin(clientCompanies, eq(clientCompanies.id, sites.clientCompanyId))
+		.leftJoin(
+			costBases,
+			eq(costBases.id, sql`COALESCE(${survey.costBasisId}, ${sites.costBasisId})`)
+		)
 		.where(eq(sites.id, survey.siteId));
 	const siteHeaders = await tx
 		.select()
@@ -105,12 +112,13 @@ async function read(tx: Tx, user: Pick<SessionUser, 'id'>, surveyId: string) {
 			elevation: site.elevation,
 			clientName: site.clientName
 		},
-		costBasis: storedCostBasis(site.id, site.costBasis),
+		costBasis: storedCostBasis(site.id, site.costBasis, site),
 		headers: siteHeaders.map((h) => ({
 			id: h.id,
 			name: h.name,
 			pressure: h.pressure,
 			...(h.designTemperature === null ? {} : { designTemperature: h.designTemperature }),
+			...(h.operatingHours === null ? {} : { operatingHours: h.operatingHours }),
 			sortOrder: h.sortOrder
 		})),
 		areas: siteAreas,
@@ -138,9 +146,9 @@ async function read(tx: Tx, user: Pick<SessionUser, 'id'>, surveyId: string) {
  * an older shape) is left out rather than refusing the whole snapshot: the Walk then records
  * without prices, and the Desk shows the consultant what to fix.
  */
-function storedCostBasis(siteId: string, raw: unknown): CostBasis | null {
+function storedCostBasis(siteId: string, raw: unknown, site: SiteAtmosphere): CostBasis | null {
 	if (raw === null || raw === undefined) return null;
-	const parsed = costBasisSchema.safeParse(raw);
-	if (!parsed.success) console.warn(`steamwisp: cost basis of site ${siteId} fails its checks`);
-	return parsed.success ? parsed.data : null;
+	const basis = engineBasis(raw, site);
+	if (!basis) console.warn(`steamwisp: cost basis of site ${siteId} fails its checks`);
+	return basis;
 }

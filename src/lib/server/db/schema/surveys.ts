@@ -9,7 +9,8 @@ import {
 	text,
 	varchar
 } from 'drizzle-orm/mysql-core';
-import type { FindingPhysics } from '../../../steam/losses/physics';
+import type { PhysicsDetail } from '../../pricing/stored';
+import type { PhysicsFlows } from '../../../steam/losses/pricing';
 import { at, changeSeq, createdAt, id, money, updatedAt, uuid, version, word } from './columns';
 import { areas, assets, costBases, headers, sites } from './sites';
 import { firms, users } from './tenancy';
@@ -121,10 +122,13 @@ export const findings = mysqlTable(
 		/** The trap's condition (or a leak's size class): the Desk filters by it. */
 		condition: word('condition'),
 		/**
-		 * What the server's engine made of the inputs and header (flows, enthalpies, state,
-		 * cautions): independent of the cost basis, so a new basis re-prices without it moving.
+		 * What the server's engine made of the inputs and header, independent of the cost basis
+		 * (a new basis re-prices without it moving): `flows` holds the few numbers the money is
+		 * priced from (read alone when a site re-prices), `physics` the rest (state, notes,
+		 * assumptions, cautions). Joined again by $lib/server/pricing/stored.
 		 */
-		physics: json('physics').$type<FindingPhysics>(),
+		flows: json('flows').$type<PhysicsFlows>(),
+		physics: json('physics').$type<PhysicsDetail>(),
 		/** Engine version that computed `physics`. */
 		physicsEngine: varchar('physics_engine', { length: 32 }),
 		/** Engine version that priced the figures below; null: not priced. */

@@ -1,0 +1,169 @@
+/**
+ * Bringing a site's figures up to date, in batches:
+ * - `repriceSite`: a new cost basis. Money only, from each finding's stored flows; the physics
+ *   is not recomputed (docs/desk.md, "Figures").
+ * - `recomputeSite`: something the physics depends on changed (a header, the atmosphere, trap
+ *   factors, the engine). Physics and money from the stored inputs.
+ * - `refreshStaleFigures`: after migrating or upgrading the engine, every finding whose figures
+ *   are not current is recomputed or re-priced, whichever it needs.
+ * A survey that is published keeps its own (frozen) basis; the rest follow the site's current.
+ */
+import { and, asc, eq, gt, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
+import { ENGINE_VERSION } from '../../steam/version';
+import { assets, findings, sites, surveys } from '../db/schema';
+import type { Db, Executor } from '../db/types';
+import { captureFromRow } from '../walk/capture-row';
+import { pricingContext } from './context';
+import { figureColumns, moneyColumns, prepareBasis, type PreparedBasis } from './figures';
+import { writeFigures, type FigureRow } from './write';
+
+/** Findings read and written per transaction: short locks, bounded memory. */
+export const REFRESH_BATCH = 4000;
+
+export interface RefreshCount {
+	repriced: number;
+	recomputed: number;
+}
+
+/** Each survey of the site with the basis its figures should be on. */
+async function surveyBases(tx: Executor, siteId: string) {
+	return tx
+		.select({
+			id: surveys.id,
+			basisId: sql<string | null>`COALESCE(${surveys.costBasisId}, ${sites.costBasisId})`
+		})
+		.from(surveys)
+		.innerJoin(sites, eq(sites.id, surveys.siteId))
+		.where(eq(surveys.siteId, siteId));
+}
+
+/** Rows not yet on this basis with this engine (all rows when `all`). */
+function notCurrent(basisId: string | null, all: boolean): SQL | undefined {
+	if (all) return undefined;
+	return or(
+		basisId === null
+			? sql`${findings.pricedBasisId} IS NOT NULL`
+			: sql`NOT (${findings.pricedBasisId} <=> ${basisId})`,
+		isNull(findings.resultsEngine),
+		ne(findings.resultsEngine, ENGINE_VERSION)
+	);
+}
+
+/**
+ * Re-prices the site's findings on the basis each survey is priced on, from stored flows.
+ * With `all: false` only figures not already on that basis are touched.
+ */
+export async function repriceSite(db: Db, siteId: string, { all = true } = {}): Promise<number> {
+	let count = 0;
+	const prepared = new Map<string, Promise<PreparedBasis | null>>();
+	for (const survey of await surveyBases(db, siteId)) {
+		const key = survey.basisId ?? '';
+		if (!prepared.has(key)) {
+			prepared.set(
+				key,
+				pricingContext(db, siteId, survey.basisId).then((ctx) =>
+					prepareBasis(ctx.basisId, ctx.costBasis)
+				)
+			);
+		}
+		const basis = await prepared.get(key)!;
+		let after = '';
+		for (;;) {
+			const batch = await db.transaction(async (tx) => {
+				const rows = await tx
+					.select({ id: findings.id, flows: findings.flows, repairCost: findings.repairCost })
+					.from(findings)
+					.where(
+						and(
+							eq(findings.surveyId, survey.id),
+							gt(findings.id, after),
+							isNull(findings.deletedAt),
+							sql`${findings.flows} IS NOT NULL`,
+							notCurrent(basis?.id ?? null, all)
+						)
+					)
+					.orderBy(asc(findings.id))
+					.limit(REFRESH_BATCH)
+					.for('update');
+				const now = new Date();
+				const out: FigureRow[] = rows.map((r) => ({
+					id: r.id,
+					...moneyColumns(r.flows!, basis, r.repairCost, now)
+				}));
+				await writeFigures(tx, out, false);
+				return rows;
+			});
+			count += batch.length;
+			if (batch.length < REFRESH_BATCH) break;
+			after = batch[batch.length - 1].id;
+		}
+	}
+	return count;
+}
+
+/**
+ * Recomputes physics and money of the site's findings from their stored inputs (all of them,
+ * or those on one header, or those whose physics is not from this engine).
+ */
+export async function recomputeSite(
+	db: Db,
+	siteId: string,
+	{ headerId, staleOnly = false }: { headerId?: string; staleOnly?: boolean } = {}
+): Promise<number> {
+	let count = 0;
+	for (const survey of await surveyBases(db, siteId)) {
+		const ctx = await pricingContext(db, siteId, survey.basisId);
+		let after = '';
+		for (;;) {
+			const batch = await db.transaction(async (tx) => {
+				const rows = await tx
+					.select({ finding: findings, assetTag: assets.tag })
+					.from(findings)
+					.leftJoin(assets, eq(assets.id, findings.assetId))
+					.where(
+						and(
+							eq(findings.surveyId, survey.id),
+							gt(findings.id, after),
+							isNull(findings.deletedAt),
+							headerId === undefined ? undefined : eq(findings.headerId, headerId),
+							staleOnly
+								? or(isNull(findings.physicsEngine), ne(findings.physicsEngine, ENGINE_VERSION))
+								: undefined
+						)
+					)
+					.orderBy(asc(findings.id))
+					.limit(REFRESH_BATCH)
+					.for('update');
+				const now = new Date();
+				const out: FigureRow[] = [];
+				for (const { finding, assetTag } of rows) {
+					let capture;
+					try {
+						capture = captureFromRow({ ...finding, assetTag });
+					} catch {
+						continue; // a row the capture schema refuses is a server fault: left as it is
+					}
+					const input =
+						finding.repairCost === null ? capture : { ...capture, repairCost: finding.repairCost };
+					out.push({ id: finding.id, ...figureColumns(ctx, input, now) });
+				}
+				await writeFigures(tx, out, true);
+				return rows;
+			});
+			count += batch.length;
+			if (batch.length < REFRESH_BATCH) break;
+			after = batch[batch.length - 1].finding.id;
+		}
+	}
+	return count;
+}
+
+/** Every site's findings brought to current figures (after a migration or an engine upgrade). */
+export async function refreshStaleFigures(db: Db): Promise<RefreshCount> {
+	const total: RefreshCount = { repriced: 0, recomputed: 0 };
+	for (const site of await db.select({ id: sites.id }).from(sites)) {
+		total.recomputed += await recomputeSite(db, site.id, { staleOnly: true });
+		total.repriced += await repriceSite(db, site.id, { all: false });
+	}
+	return total;
+}
