@@ -4,7 +4,7 @@
  * records on, those surveys themselves, and tombstones addressed to the person (or everyone) —
  * so merging them by change_seq gives one total order, and a page ends at a counter value.
  */
-import { and, asc, eq, gt, inArray, isNull, or, sql } from 'drizzle-orm';
+import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm';
 import type { Change, PullResponse } from '../../schemas/sync';
 import { assets, findings, sites, surveys, syncTombstones } from '../db/schema';
 import type { Db, Executor } from '../db/types';
