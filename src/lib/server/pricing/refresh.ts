@@ -30,7 +30,8 @@ async function surveyBases(tx: Executor, siteId: string) {
 	return tx
 		.select({
 			id: surveys.id,
-			basisId: sql<string | null>`COALESCE(${surveys.costBasisId}, ${sites.costBasisId})`
+			basisId: sql<string | null>`COALESCE(${surveys.costBasisId}, ${sites.costBasisId})`,
+			frozen: sql<number>`${surveys.costBasisId} IS NOT NULL`
 		})
 		.from(surveys)
 		.innerJoin(sites, eq(sites.id, surveys.siteId))
@@ -50,13 +51,15 @@ function notCurrent(basisId: string | null, all: boolean): SQL | undefined {
 }
 
 /**
- * Re-prices the site's findings on the basis each survey is priced on, from stored flows.
- * With `all: false` only figures not already on that basis are touched.
+ * Re-prices the site's findings on the basis each survey is priced on, from stored flows: with
+ * `all` (a new basis) every finding of the surveys that follow the site's basis; otherwise only
+ * figures not already on their survey's basis, frozen surveys included.
  */
 export async function repriceSite(db: Db, siteId: string, { all = true } = {}): Promise<number> {
 	let count = 0;
 	const prepared = new Map<string, Promise<PreparedBasis | null>>();
 	for (const survey of await surveyBases(db, siteId)) {
+		if (all && Number(survey.frozen)) continue; // a published survey keeps its own basis
 		const key = survey.basisId ?? '';
 		if (!prepared.has(key)) {
 			prepared.set(
@@ -102,8 +105,10 @@ export async function repriceSite(db: Db, siteId: string, { all = true } = {}): 
 }
 
 /**
- * Recomputes physics and money of the site's findings from their stored inputs (all of them,
- * or those on one header, or those whose physics is not from this engine).
+ * Recomputes physics and money of the site's findings from their stored inputs: those of the
+ * surveys that follow the site (all, or those on one header), or — `staleOnly`, after a
+ * migration or engine upgrade — those of any survey whose physics is not from this engine.
+ * A published survey's figures do not follow later changes to the site.
  */
 export async function recomputeSite(
 	db: Db,
@@ -112,6 +117,7 @@ export async function recomputeSite(
 ): Promise<number> {
 	let count = 0;
 	for (const survey of await surveyBases(db, siteId)) {
+		if (!staleOnly && Number(survey.frozen)) continue;
 		const ctx = await pricingContext(db, siteId, survey.basisId);
 		let after = '';
 		for (;;) {
