@@ -165,7 +165,19 @@ const fieldFindings: DemoFinding[] = [
 	fieldTrap(12, 'ST-BH-14', 'failed-open', 'ultrasound', '2026-11-17T08:40:00Z'),
 	fieldTrap(15, 'ST-BH-11', 'leaking', 'combined', '2026-11-17T08:25:00Z'),
 	fieldTrap(16, 'ST-BH-02', 'working', 'ultrasound', '2026-11-17T08:05:00Z'),
-	fieldTrap(17, 'ST-BH-06', 'failed-open', 'combined', '2026-11-17T08:15:00Z', 'Still blowing.'),
+	// Edited at the desk after the phone last had it (version 2): the phone's own edit of it
+	// waits as a conflict (seed-desk.ts).
+	{
+		...fieldTrap(
+			17,
+			'ST-BH-06',
+			'failed-open',
+			'combined',
+			'2026-11-17T08:15:00Z',
+			'Still blowing: vent plume seen from the yard.'
+		),
+		version: 2
+	},
 	fieldTrap(18, 'ST-E1-01', 'working', 'ultrasound', '2026-11-17T09:00:00Z'),
 	fieldTrap(19, 'ST-E2-08', 'not-accessible', undefined, '2026-11-17T09:55:00Z', 'Gallery closed.'),
 	{
@@ -183,7 +195,9 @@ const fieldFindings: DemoFinding[] = [
 		kind: 'leak',
 		headerId: processHeader,
 		areaId: evaporatorHall.id,
-		location: 'Evaporator 2 gallery, globe valve gland',
+		// Corrected at the desk (version 2) after the phone deleted it: that delete waits.
+		version: 2,
+		location: 'Evaporator 2 gallery, globe valve gland (east end)',
 		inputs: { sizeClass: 'medium' }
 	},
 	{

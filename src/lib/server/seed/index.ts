@@ -4,6 +4,7 @@ import { hashPassword } from '../auth/password';
 import * as schema from '../db/schema';
 import { demoClients, demoFirms, demoPassword, demoSites, demoSurveys, demoUsers } from './demo';
 import { renameOldDemoPlaces } from './renames';
+import { seedConflicts, seedMaltings } from './seed-desk';
 import { seedDemoFindings } from './seed-findings';
 
 /**
@@ -55,4 +56,6 @@ export async function seedDemo(db: Db): Promise<void> {
 		}
 	}
 	await seedDemoFindings(db);
+	await seedMaltings(db);
+	await seedConflicts(db);
 }

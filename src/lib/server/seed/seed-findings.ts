@@ -75,7 +75,8 @@ export async function seedDemoFindings(db: Db): Promise<void> {
 					surveyId: capture.surveyId,
 					...figureColumns(context, finding),
 					repairCost: finding.repairCost ?? null,
-					status: finding.status
+					status: finding.status,
+					version: raw.version
 				})
 				.onDuplicateKeyUpdate(keep);
 		}
