@@ -1,0 +1,213 @@
+/**
+ * The Desk's review table: one survey's findings sorted, filtered, searched and paged in SQL
+ * over the typed figure columns, with the filtered set's totals. Two steps, as the sync feed
+ * does: the page's ids first (only the joins the sort or search needs), then the page's rows,
+ * so a survey of 10,000 findings never reads its JSON columns to sort them.
+ */
+import { and, asc, desc, eq, inArray, isNotNull, isNull, like, or, sql } from 'drizzle-orm';
+import type { SQL } from 'drizzle-orm';
+import type { FindingsQuery, FindingSortKey } from '../../schemas/desk-findings';
+import { FINDING_CONDITIONS, NO_PLACE } from '../../schemas/desk-findings';
+import { FINDING_STATUSES } from '../../schemas/finding-vocabulary';
+import { ENGINE_VERSION } from '../../steam/version';
+import { areas, assets, costBases, findings as F } from '../db/schema';
+import { headers, sites, surveys } from '../db/schema';
+import type { Executor } from '../db/types';
+import { figuresCurrentSql, surveyBasisSql } from '../pricing/state';
+import { pageRows, type FindingItem } from './findings-rows';
+
+export type { FindingItem };
+
+export interface SurveyPricing {
+	id: string;
+	name: string;
+	siteId: string;
+	/** The basis the survey is priced on now (frozen, else the site's); null: none yet. */
+	basisId: string | null;
+	/** Its currency (the site's when there is no basis). */
+	currency: string;
+}
+
+/** The survey's name and the basis its figures count as current on. */
+export async function surveyPricing(db: Executor, surveyId: string): Promise<SurveyPricing | null> {
+	const [row] = await db
+		.select({
+			id: surveys.id,
+			name: surveys.name,
+			siteId: surveys.siteId,
+			basisId: surveyBasisSql,
+			basisCurrency: sql<
+				string | null
+			>`(SELECT JSON_UNQUOTE(JSON_EXTRACT(${costBases.basis}, '$.currency')) FROM ${costBases} WHERE ${costBases.id} = ${surveyBasisSql})`,
+			siteCurrency: sites.currency
+		})
+		.from(surveys)
+		.innerJoin(sites, eq(sites.id, surveys.siteId))
+		.where(eq(surveys.id, surveyId))
+		.limit(1);
+	if (!row) return null;
+	const { basisCurrency, siteCurrency, ...rest } = row;
+	return { ...rest, currency: basisCurrency ?? siteCurrency };
+}
+
+export interface FindingTotals {
+	/** Sums over the filtered findings whose figures are current (out-of-date ones are left out). */
+	steamKgH: number;
+	heatKw: number;
+	fuelGjYear: number;
+	costMinor: number;
+	co2KgYear: number;
+	waterM3Year: number;
+	/** Repair costs are typed at the Desk, not priced: every filtered finding's. */
+	repairCostMinor: number;
+	currency: string;
+	/** Filtered findings whose figures are out of date (made by another engine or basis). */
+	outOfDate: number;
+}
+
+export interface FindingsPage {
+	items: FindingItem[];
+	total: number;
+	page: number;
+	size: number;
+	totals: FindingTotals;
+}
+
+const placeFilter = (column: typeof F.areaId | typeof F.headerId, values: string[]) => {
+	if (values.length === 0) return undefined;
+	const ids = values.filter((v) => v !== NO_PLACE);
+	return or(
+		ids.length > 0 ? inArray(column, ids) : undefined,
+		values.includes(NO_PLACE) ? isNull(column) : undefined
+	);
+};
+
+const stageFilter = (stages: string[]) => {
+	if (stages.length === 0) return undefined;
+	const statuses = stages.filter((s) => (FINDING_STATUSES as readonly string[]).includes(s));
+	return or(
+		statuses.length > 0 ? inArray(F.status, statuses) : undefined,
+		stages.includes('unreviewed') ? isNull(F.reviewedAt) : undefined,
+		stages.includes('desk-checked') ? isNotNull(F.reviewedAt) : undefined
+	);
+};
+
+/** LIKE's wildcards taken literally (MariaDB escapes with a backslash). */
+const contains = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+function filterOf(surveyId: string, q: FindingsQuery): SQL {
+	const pattern = contains(q.q);
+	return and(
+		eq(F.surveyId, surveyId),
+		isNull(F.deletedAt),
+		q.kind.length > 0 ? inArray(F.kind, q.kind) : undefined,
+		placeFilter(F.areaId, q.area),
+		placeFilter(F.headerId, q.header),
+		q.condition.length > 0 ? inArray(F.condition, q.condition) : undefined,
+		stageFilter(q.stage),
+		q.q
+			? or(like(F.location, pattern), like(F.notes, pattern), like(assets.tag, pattern))
+			: undefined
+	)!;
+}
+
+/** Lifecycle and severity orders rather than alphabetical ids. */
+const listOrder = (column: typeof F.status | typeof F.condition, values: readonly string[]) =>
+	sql`FIELD(${column}, ${sql.join(
+		values.map((v) => sql`${v}`),
+		sql`, `
+	)})`;
+
+const SORT: Record<FindingSortKey, SQL> = {
+	recorded: sql`${F.recordedAt}`,
+	kind: sql`${F.kind}`,
+	area: sql`${areas.name}`,
+	header: sql`${headers.name}`,
+	location: sql`${F.location}`,
+	tag: sql`${assets.tag}`,
+	condition: sql`NULLIF(${listOrder(F.condition, FINDING_CONDITIONS)}, 0)`,
+	steam: sql`${F.steamLoss}`,
+	heat: sql`${F.heatLoss}`,
+	energy: sql`${F.fuelEnergy}`,
+	cost: sql`${F.cost}`,
+	co2: sql`${F.co2}`,
+	water: sql`${F.water}`,
+	repair: sql`${F.repairCost}`,
+	payback: sql`${F.paybackYears}`,
+	status: listOrder(F.status, FINDING_STATUSES)
+};
+
+/** Missing values last in both directions; ties by id, so paging never repeats or skips a row. */
+function orderOf(q: FindingsQuery): SQL[] {
+	const key = SORT[q.sort];
+	return [sql`${key} IS NULL`, q.dir === 'asc' ? asc(key) : desc(key), asc(F.id)];
+}
+
+async function pageIds(db: Executor, surveyId: string, q: FindingsQuery): Promise<string[]> {
+	let query = db.select({ id: F.id }).from(F).$dynamic();
+	if (q.q || q.sort === 'tag') query = query.leftJoin(assets, eq(assets.id, F.assetId));
+	if (q.sort === 'area') query = query.leftJoin(areas, eq(areas.id, F.areaId));
+	if (q.sort === 'header') query = query.leftJoin(headers, eq(headers.id, F.headerId));
+	const rows = await query
+		.where(filterOf(surveyId, q))
+		.orderBy(...orderOf(q))
+		.limit(q.size)
+		.offset((q.page - 1) * q.size);
+	return rows.map((r) => r.id);
+}
+
+const sumIf = (ok: SQL, column: SQL | typeof F.steamLoss) =>
+	sql<string | null>`SUM(CASE WHEN ${ok} THEN ${column} END)`;
+
+/** Not current, yet with figures a current one would have had (figureState ≠ none), in SQL. */
+const outOfDateSql = sql`NOT ${figuresCurrentSql} AND NOT (${F.physicsEngine} <=> ${ENGINE_VERSION} AND (${F.flows} IS NULL OR (${F.resultsEngine} IS NULL AND ${surveyBasisSql} IS NULL)))`;
+
+async function totalsOf(db: Executor, surveyId: string, q: FindingsQuery, currency: string) {
+	let query = db
+		.select({
+			total: sql<number>`COUNT(*)`,
+			steam: sumIf(figuresCurrentSql, sql`${F.steamLoss}`),
+			heat: sumIf(figuresCurrentSql, sql`${F.heatLoss}`),
+			fuel: sumIf(figuresCurrentSql, sql`${F.fuelEnergy}`),
+			cost: sumIf(figuresCurrentSql, sql`${F.cost}`),
+			co2: sumIf(figuresCurrentSql, sql`${F.co2}`),
+			water: sumIf(figuresCurrentSql, sql`${F.water}`),
+			repair: sql<string | null>`SUM(${F.repairCost})`,
+			outOfDate: sql<string | null>`SUM(CASE WHEN ${outOfDateSql} THEN 1 ELSE 0 END)`
+		})
+		.from(F)
+		.innerJoin(surveys, eq(surveys.id, F.surveyId))
+		.innerJoin(sites, eq(sites.id, surveys.siteId))
+		.$dynamic();
+	if (q.q) query = query.leftJoin(assets, eq(assets.id, F.assetId));
+	const [row] = await query.where(filterOf(surveyId, q));
+	const n = (v: string | number | null | undefined) => Number(v ?? 0);
+	return {
+		total: n(row?.total),
+		totals: {
+			steamKgH: n(row?.steam),
+			heatKw: n(row?.heat),
+			fuelGjYear: n(row?.fuel),
+			costMinor: n(row?.cost),
+			co2KgYear: n(row?.co2),
+			waterM3Year: n(row?.water),
+			repairCostMinor: n(row?.repair),
+			currency,
+			outOfDate: n(row?.outOfDate)
+		}
+	};
+}
+
+/** One page of a survey's findings, as `GET /api/surveys/[id]/findings` answers it. */
+export async function findingsPage(
+	db: Executor,
+	survey: SurveyPricing,
+	q: FindingsQuery
+): Promise<FindingsPage> {
+	const [ids, counted] = await Promise.all([
+		pageIds(db, survey.id, q),
+		totalsOf(db, survey.id, q, survey.currency)
+	]);
+	const items = await pageRows(db, ids, survey);
+	return { items, total: counted.total, page: q.page, size: q.size, totals: counted.totals };
+}
