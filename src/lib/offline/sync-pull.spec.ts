@@ -5,7 +5,7 @@ import { saveFinding } from './findings';
 import { storeSnapshot } from './snapshot';
 import { leakCapture, snapshot, SURVEY_ID, trapCapture } from './spec-fixtures';
 import { syncOnce } from './sync';
-import { getMeta, pullCursor } from './sync-meta';
+import { deviceId, getMeta, pullCursor } from './sync-meta';
 import { pullChanges } from './sync-pull';
 import { device, dropDevices, OTHER_SURVEY_ID, photoOf, server } from './sync-spec-fixtures';
 
@@ -33,12 +33,14 @@ describe('syncOnce, pulling', () => {
 		const resumed = await syncOnce(db, { fetch: srv.fetch, pullLimit: 2 });
 		expect(resumed.problem).toBeUndefined();
 		expect(resumed).toMatchObject({ pulled: 3, cursor: srv.counter });
+		// Each page names the device, for the Desk's sync state.
+		const me = await deviceId(db);
 		expect(pulls(srv.requests)).toEqual([
-			`since=${start}&limit=2`,
-			`since=${made[1].seq}&limit=2`,
-			`since=${made[3].seq}&limit=2`,
-			`since=${made[3].seq}&limit=2`,
-			`since=${made[5].seq}&limit=2`
+			`since=${start}&limit=2&device=${me}`,
+			`since=${made[1].seq}&limit=2&device=${me}`,
+			`since=${made[3].seq}&limit=2&device=${me}`,
+			`since=${made[3].seq}&limit=2&device=${me}`,
+			`since=${made[5].seq}&limit=2&device=${me}`
 		]);
 		const onDevice = await db.findings.toArray();
 		expect(onDevice.map((f) => f.capture.location).sort()).toEqual(
@@ -100,7 +102,7 @@ describe('syncOnce, pulling', () => {
 			survey: srv.surveys.get(OTHER_SURVEY_ID)!.summary
 		});
 		await syncOnce(db, { fetch: srv.fetch });
-		expect(pulls(srv.requests)).toEqual([`since=${early}`]);
+		expect(pulls(srv.requests)).toEqual([`since=${early}&device=${await deviceId(db)}`]);
 		expect(await db.findings.get(before.id)).toMatchObject({ version: 1, pending: 0 });
 		const cursors = (await db.surveys.toArray()).map((s) => s.cursor);
 		expect(cursors).toEqual([srv.counter, srv.counter]);
@@ -122,7 +124,7 @@ describe('syncOnce, pulling', () => {
 		expect(await db.findings.get(late.id)).toBeUndefined();
 		await storeSnapshot(db, taken);
 		await syncOnce(db, { fetch: srv.fetch });
-		expect(pulls(srv.requests).at(-1)).toBe(`since=${taken.cursor}`);
+		expect(pulls(srv.requests).at(-1)).toBe(`since=${taken.cursor}&device=${await deviceId(db)}`);
 		expect(await db.findings.get(late.id)).toMatchObject({ version: 1, pending: 0 });
 	});
 });

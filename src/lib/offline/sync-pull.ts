@@ -13,15 +13,18 @@ export async function pullChanges(
 	db: DeviceDatabase,
 	fetchFn: typeof fetch,
 	since: number,
-	limit?: number
+	limit?: number,
+	/** This device's id (meta), so the Desk can show when it last fetched. */
+	device?: string
 ): Promise<{ pulled: number; cursor: number; problem?: SyncProblem }> {
 	let cursor = since;
 	const pageSize = limit === undefined ? '' : `&limit=${limit}`;
+	const named = device === undefined ? '' : `&device=${encodeURIComponent(device)}`;
 	let pulled = 0;
 	for (;;) {
 		let response: Response;
 		try {
-			response = await fetchFn(`/api/sync/pull?since=${cursor}${pageSize}`);
+			response = await fetchFn(`/api/sync/pull?since=${cursor}${pageSize}${named}`);
 		} catch {
 			return { pulled, cursor, problem: problemFromStatus(0) };
 		}

@@ -3,6 +3,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { deleteFinding, saveFinding } from './findings';
 import { leakCapture, SURVEY_ID, trapCapture } from './spec-fixtures';
 import { syncOnce } from './sync';
+import { deviceId } from './sync-meta';
 import { device, dropDevices, photoOf, server } from './sync-spec-fixtures';
 
 afterEach(dropDevices);
@@ -49,7 +50,9 @@ describe('syncOnce, pushing', () => {
 		expect(again).toMatchObject({ pushed: 0, photosSent: 0, pulled: 0 });
 		expect(srv.counter).toBe(counter);
 		// Nothing to push or upload: one pull only.
-		expect(srv.requests.slice(requests)).toEqual([`GET /api/sync/pull?since=${counter}`]);
+		expect(srv.requests.slice(requests)).toEqual([
+			`GET /api/sync/pull?since=${counter}&device=${await deviceId(db)}`
+		]);
 		expect(await db.findings.get(trap.id)).toMatchObject({ version: 1, pending: 0 });
 	});
 

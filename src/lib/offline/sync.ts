@@ -59,7 +59,7 @@ export async function syncOnce(db: DeviceDatabase, options: SyncOptions): Promis
 		// With no survey on the device there is nothing a pull could update.
 		const surveys = await db.surveys.count();
 		if (surveys > 0 && (!photos.problem || !photos.problem.retryable)) {
-			const pull = await pullChanges(db, fetchFn, summary.cursor, options.pullLimit);
+			const pull = await pullChanges(db, fetchFn, summary.cursor, options.pullLimit, id);
 			summary.pulled = pull.pulled;
 			summary.cursor = pull.cursor;
 			problem ??= pull.problem;

@@ -3,6 +3,7 @@ import { db } from '$lib/server/db';
 import { requireRole, requireSurveyAccess } from '$lib/server/policy';
 import { readJsonBody } from '$lib/server/sync/body';
 import { surveyOf } from '$lib/server/sync/apply';
+import { noteExchange } from '$lib/server/sync/devices';
 import { applyPush, pushSurveys } from '$lib/server/sync/push';
 import { privateJson } from '$lib/server/walk/respond';
 import { MAX_PUSH_BYTES, pushRequestSchema } from '$lib/schemas/sync';
@@ -31,6 +32,8 @@ export const POST: RequestHandler = async (event) => {
 		await requireSurveyAccess(user, id, 'write');
 	}
 	const answer = await applyPush(db, { user, address: safeAddress(event), surveys }, request);
+	// The Desk's sync state: this device was heard from (docs/sync.md).
+	await noteExchange(db, user, request.deviceId, 'push');
 	return privateJson(answer);
 };
 
