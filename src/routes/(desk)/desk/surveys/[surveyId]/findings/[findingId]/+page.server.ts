@@ -1,0 +1,73 @@
+import { error, fail } from '@sveltejs/kit';
+import { uuidSchema } from '$lib/schemas/common';
+import { findingEditFormSchema, reviewFormSchema } from '$lib/schemas/desk-finding';
+import { MOVED_MESSAGE } from '$lib/server/desk/finding-edit';
+import { openFinding, reviewFinding, saveFindingEdit } from '$lib/server/desk/finding-pages';
+import { formProblem, parseForm } from '$lib/server/forms';
+import { requireRole, requireSurveyAccess } from '$lib/server/policy';
+import type { Actions, PageServerLoad, RequestEvent } from './$types';
+import { typedBack } from './typed-back';
+
+const hide = (): never => error(404, 'Not found.');
+
+export const load: PageServerLoad = async (event) => {
+	const user = requireRole(event, 'desk.open');
+	const access = await requireSurveyAccess(user, event.params.surveyId, 'read');
+	if (!uuidSchema.safeParse(event.params.findingId).success) hide();
+	return (await openFinding(user, access.id, event.params.findingId)) ?? hide();
+};
+
+/** The person and the survey an action changes (403 read-only, 404 hidden or another firm's). */
+async function writer(event: RequestEvent) {
+	const user = requireRole(event, 'survey.manage');
+	const access = await requireSurveyAccess(user, event.params.surveyId, 'write');
+	if (!uuidSchema.safeParse(event.params.findingId).success) hide();
+	return { user, surveyId: access.id, findingId: event.params.findingId };
+}
+
+export const actions: Actions = {
+	edit: async (event) => {
+		const { user, surveyId, findingId } = await writer(event);
+		const form = await parseForm(event.request, findingEditFormSchema, [], { nested: true });
+		if (!form.ok) {
+			// Only the version or the repair cost can fail here; the rest is read below.
+			const { errors, error: message } = form.failure.data;
+			return fail(400, { action: 'edit', values: null, layers: null, errors, error: message });
+		}
+		const typed = typedBack(form.fields);
+		const outcome = await saveFindingEdit(user, surveyId, findingId, form.data);
+		switch (outcome.kind) {
+			case 'written':
+				return { action: 'edit', saved: outcome.version };
+			case 'problems':
+				return fail(400, {
+					action: 'edit',
+					...typed,
+					errors: outcome.problems,
+					error: 'Some fields need another look: see the messages beside them. Nothing was saved.'
+				});
+			case 'moved':
+				return fail(409, { action: 'edit', ...typed, errors: {}, error: MOVED_MESSAGE });
+			case 'misplaced':
+				return fail(400, {
+					action: 'edit',
+					...typed,
+					errors: { [outcome.field]: outcome.message },
+					error: `${outcome.message}. Nothing was saved.`
+				});
+			case 'missing':
+				return hide();
+		}
+	},
+
+	review: async (event) => {
+		const { user, surveyId, findingId } = await writer(event);
+		const form = await parseForm(event.request, reviewFormSchema);
+		if (!form.ok) return form.failure;
+		const reviewed = form.data.reviewed === 'yes';
+		if (!(await reviewFinding(user, surveyId, findingId, reviewed))) {
+			return formProblem(404, 'This finding is not on the survey (or was deleted).');
+		}
+		return { action: 'review', reviewed };
+	}
+};
