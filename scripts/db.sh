@@ -37,7 +37,7 @@ start() {
 	# setsid + redirected output: the server must not hold the caller's terminal or pipes.
 	setsid mariadbd --no-defaults --datadir="$DB_DATADIR" --user="$SOCK_USER" \
 		--bind-address=127.0.0.1 --port="$DB_PORT" --socket="$DB_SOCKET" --pid-file="$DB_PID" \
-		--log-error="$DB_LOG" --skip-name-resolve --innodb-buffer-pool-size=64M \
+		--log-error="$DB_LOG" --skip-name-resolve --innodb-buffer-pool-size="${STEAMWISP_DB_BUFFER_POOL:-512M}" \
 		--default-time-zone=+00:00 --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
 		--max-connections=200 </dev/null >/dev/null 2>&1 &
 	local deadline=$((SECONDS + ${STEAMWISP_DB_START_TIMEOUT:-60}))
