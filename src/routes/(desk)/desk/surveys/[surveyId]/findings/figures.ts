@@ -1,0 +1,116 @@
+/**
+ * The table's figures in the person's units (stored figures are kg/h, kW, GJ, kg, m³ per year;
+ * money in minor units of its currency). Numbers only: the column headers carry the units.
+ */
+import { formatMoney } from '$lib/components/walk/form/display';
+import { fromMinorUnits } from '$lib/steam';
+import {
+	displayUnit,
+	formatQuantityParts,
+	formatSignificant,
+	unitLabel,
+	type Quantity,
+	type UnitSystemId
+} from '$lib/units';
+import type { FindingItem, FindingTotals } from '$lib/server/desk/findings-query';
+
+export type FigureColumn =
+	'steam' | 'heat' | 'energy' | 'cost' | 'co2' | 'water' | 'repair' | 'payback';
+
+/** Stored value → base units, and the quantity it is shown as. */
+const QUANTITY: Partial<Record<FigureColumn, [Quantity, number]>> = {
+	steam: ['massFlow', 1 / 3600],
+	heat: ['power', 1000],
+	energy: ['energy', 1e9],
+	co2: ['mass', 1],
+	water: ['volume', 1]
+};
+
+/** Column titles with the person's units: "Steam lost (lb/h)". */
+export function columnTitle(column: FigureColumn, system: UnitSystemId, currency: string): string {
+	const unit = (q: Quantity) => unitLabel(displayUnit(q, system));
+	switch (column) {
+		case 'steam':
+			return `Steam lost (${unit('massFlow')})`;
+		case 'heat':
+			return `Heat lost (${unit('power')})`;
+		case 'energy':
+			return `Fuel (${unit('energy')}/yr)`;
+		case 'cost':
+			return `Cost (${currency}/yr)`;
+		case 'co2':
+			return `CO2 (${unit('mass')}/yr)`;
+		case 'water':
+			return `Water (${unit('volume')}/yr)`;
+		case 'repair':
+			return `Repair (${currency})`;
+		case 'payback':
+			return 'Payback (years)';
+	}
+}
+
+const money = (minor: number | null, currency: string) =>
+	minor === null ? '—' : formatMoney(fromMinorUnits(minor, currency), currency);
+
+function quantity(column: FigureColumn, stored: number | null, system: UnitSystemId): string {
+	const [q, scale] = QUANTITY[column]!;
+	return formatQuantityParts(stored === null ? null : stored * scale, q, system).number;
+}
+
+/** One cell's text. */
+export function figureText(item: FindingItem, column: FigureColumn, system: UnitSystemId): string {
+	switch (column) {
+		case 'steam':
+			return quantity(column, item.steamKgH, system);
+		case 'heat':
+			return quantity(column, item.heatKw, system);
+		case 'energy':
+			return quantity(column, item.fuelGjYear, system);
+		case 'co2':
+			return quantity(column, item.co2KgYear, system);
+		case 'water':
+			return quantity(column, item.waterM3Year, system);
+		case 'cost':
+			return money(item.costMinor, item.currency);
+		case 'repair':
+			return money(item.repairCostMinor, item.currency);
+		case 'payback':
+			return item.paybackYears === null ? '—' : formatSignificant(item.paybackYears);
+	}
+}
+
+/** A total's text (totals have no payback). */
+export function totalText(t: FindingTotals, column: FigureColumn, system: UnitSystemId): string {
+	switch (column) {
+		case 'steam':
+			return quantity(column, t.steamKgH, system);
+		case 'heat':
+			return quantity(column, t.heatKw, system);
+		case 'energy':
+			return quantity(column, t.fuelGjYear, system);
+		case 'co2':
+			return quantity(column, t.co2KgYear, system);
+		case 'water':
+			return quantity(column, t.waterM3Year, system);
+		case 'cost':
+			return money(t.costMinor, t.currency);
+		case 'repair':
+			return money(t.repairCostMinor, t.currency);
+		case 'payback':
+			return '';
+	}
+}
+
+/** Why a row's figures are not current, in words (null when they are). */
+export function staleWords(item: FindingItem): string | null {
+	switch (item.figureState) {
+		case 'current':
+			return null;
+		case 'basis':
+			return 'Out of date: priced on an earlier cost basis';
+		case 'engine':
+			return 'Out of date: worked out by an older version of the calculations';
+		case 'none':
+			return item.pricingNote ?? 'No figures for this finding';
+	}
+}
