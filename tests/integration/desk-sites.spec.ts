@@ -64,9 +64,9 @@ async function post(
 	});
 	const result = await action(routeEvent(user, routeId, request, params) as never);
 	if (isActionFailure(result)) {
-		return { status: result.status, data: result.data as Record<string, never> };
+		return { status: result.status, data: result.data as unknown as Record<string, never> };
 	}
-	return { status: 200, data: result as Record<string, never> };
+	return { status: 200, data: result as unknown as Record<string, never> };
 }
 
 const auditCount = async () => Number((await db.select({ n: count() }).from(schema.auditLog))[0].n);
