@@ -14,3 +14,11 @@ export function day(iso: string | null): string {
 	if (Number.isNaN(d.getTime())) return iso;
 	return d.toLocaleDateString('en-GB', { dateStyle: 'medium', timeZone: 'UTC' });
 }
+
+/** A survey's days in words, whichever of them are set. */
+export function days(from: string | null, to: string | null): string {
+	if (from && to) return `${day(from)} to ${day(to)}`;
+	if (from) return `from ${day(from)}`;
+	if (to) return `until ${day(to)}`;
+	return 'no dates set';
+}
