@@ -5,7 +5,8 @@
  * change feed position do not move: new figures are no edit to the finding (a device holding
  * it is not put into conflict by a re-price).
  */
-import { sql, type SQL } from 'drizzle-orm';
+import { sql } from 'drizzle-orm';
+import { format } from 'mysql2';
 import type { Tx } from '../db/types';
 import type { FigureColumns, MoneyColumns } from './figures';
 
@@ -34,11 +35,13 @@ const PHYSICS: [keyof FigureColumns, string, string][] = [
 /** Rows per INSERT: well under MariaDB's 65,535 placeholders at 15 columns. */
 export const WRITE_BATCH = 2000;
 
-function value(row: FigureRow, key: keyof FigureColumns): unknown {
+type Cell = string | number | Date | null;
+
+function value(row: FigureRow, key: keyof FigureColumns): Cell {
 	const v = row[key];
 	if (v === undefined || v === null) return null;
 	if (key === 'flows' || key === 'physics') return JSON.stringify(v);
-	return v;
+	return v as Cell;
 }
 
 /** Writes figures (and physics too when `withPhysics`) of up to WRITE_BATCH rows. */
@@ -54,15 +57,17 @@ export async function writeFigures(tx: Tx, rows: FigureRow[], withPhysics: boole
 		)
 	);
 	await tx.execute(sql.raw(`DELETE FROM ${name}`));
+	const names = columns.map(([, col]) => `\`${col}\``).join(', ');
+	const tuple = `(${['?', ...columns.map(() => '?')].join(', ')})`;
 	for (let at = 0; at < rows.length; at += WRITE_BATCH) {
 		const part = rows.slice(at, at + WRITE_BATCH);
-		const values: SQL[] = part.map(
-			(row) =>
-				sql`(${sql.join([sql`${row.id}`, ...columns.map(([key]) => sql`${value(row, key)}`)], sql`, `)})`
-		);
-		await tx.execute(
-			sql`INSERT INTO ${sql.raw(name)} (id, ${sql.raw(columns.map(([, col]) => `\`${col}\``).join(', '))}) VALUES ${sql.join(values, sql`, `)}`
-		);
+		// Escaped by mysql2's own formatter: building tens of thousands of bound parameters
+		// through Drizzle's sql template costs more than the whole UPDATE.
+		const values = part
+			// Times in UTC, as the app's pool writes them (MariaDB runs at +00:00).
+			.map((row) => format(tuple, [row.id, ...columns.map(([key]) => value(row, key))], false, 'Z'))
+			.join(', ');
+		await tx.execute(sql.raw(`INSERT INTO ${name} (id, ${names}) VALUES ${values}`));
 	}
 	await tx.execute(
 		sql.raw(
