@@ -47,12 +47,9 @@ const basis: CostBasis = {
 	operatingHours: 8000
 };
 
-const finding = (
-	n: number,
-	surveyId: string,
-	headerId: string,
-	kind: 'trap' | 'leak'
-): FindingInput =>
+type Planned = FindingInput & { surveyId: string; location: string };
+
+const finding = (n: number, surveyId: string, headerId: string, kind: 'trap' | 'leak'): Planned =>
 	({
 		id: id(9, n),
 		surveyId,
@@ -68,7 +65,7 @@ const finding = (
 			kind === 'trap'
 				? { trapType: 'thermodynamic', dn: 15, condition: 'failed-open', discharge: 'atmosphere' }
 				: { sizeClass: n % 2 ? 'small' : 'medium' }
-	}) as FindingInput;
+	}) as Planned;
 
 const plan = [
 	...Array.from({ length: 12 }, (_, i) =>
