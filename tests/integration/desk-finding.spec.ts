@@ -8,7 +8,7 @@
 import { and, count, eq, inArray, like } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { FindingCapture } from '../../src/lib/schemas/capture';
+import type { FindingCapture, TrapCapture } from '../../src/lib/schemas/capture';
 import type { FindingEditForm } from '../../src/lib/schemas/desk-finding';
 import { pullResponseSchema, pushResponseSchema } from '../../src/lib/schemas/sync';
 import * as schema from '../../src/lib/server/db/schema';
@@ -57,13 +57,14 @@ async function openedForm(id: string): Promise<FindingEditForm> {
 	const page = await openFinding(consultantA, fieldSurveyId, id, db);
 	expect(page).not.toBeNull();
 	const { values, layers } = page!.form;
-	return { ...values, version: String(page!.finding.version), repairCost: '', layers };
+	const { repairCost, ...fields } = values;
+	return { fields, version: String(page!.finding.version), repairCost, layers };
 }
 
-function newTrap(n: string) {
+function newTrap(n: string): TrapCapture {
 	const c = trapCapture(`${TAG}${n}`);
 	mine.push(c.id);
-	return c;
+	return c as TrapCapture;
 }
 
 const insulationTemplate = demoFindings.find(
@@ -117,12 +118,12 @@ describe('editing a finding at the Desk', () => {
 		const before = await row(trap.id);
 		expect(before.condition).toBe('failed-open');
 		const form = await openedForm(trap.id);
-		expect(form.condition).toBe('failed-open');
+		expect(form.fields.condition).toBe('failed-open');
 		const outcome = await saveFindingEdit(
 			consultantA,
 			fieldSurveyId,
 			trap.id,
-			{ ...form, condition: 'leaking', repairCost: '180.50' },
+			{ ...form, fields: { ...form.fields, condition: 'leaking' }, repairCost: '180.50' },
 			db
 		);
 		expect(outcome).toMatchObject({ kind: 'written', version: 2 });
@@ -163,7 +164,7 @@ describe('editing a finding at the Desk', () => {
 			consultantA,
 			fieldSurveyId,
 			trap.id,
-			{ ...form, version: '1', condition: 'working' },
+			{ ...form, version: '1', fields: { ...form.fields, condition: 'working' } },
 			db
 		);
 		expect(outcome).toEqual({ kind: 'moved', version: 2 });
@@ -192,8 +193,7 @@ describe('editing a finding at the Desk', () => {
 			pipe.id,
 			{
 				...form,
-				length: '-3',
-				headerId: northgaleHeader,
+				fields: { ...form.fields, length: '-3', headerId: northgaleHeader },
 				layers: [form.layers[0], { thickness: '30', material: 'unobtainium', conductivity: '' }]
 			},
 			db
@@ -248,7 +248,7 @@ describe('settling sync conflicts', () => {
 	let version = 1;
 
 	/** A consultant's edit on the server, then the auditor's stale edit: one conflict. */
-	async function conflict(notes: string, condition = 'working' as const) {
+	async function conflict(notes: string, condition: 'working' | 'failed-open' = 'working') {
 		const current = (await row(trap.id)).version;
 		const stale = upsert(
 			{
@@ -271,7 +271,13 @@ describe('settling sync conflicts', () => {
 	it('keepServer keeps the server finding as its next version and the device data on record', async () => {
 		await pushed(trap);
 		const form = await openedForm(trap.id);
-		await saveFindingEdit(consultantA, fieldSurveyId, trap.id, { ...form, notes: 'Desk note' }, db);
+		await saveFindingEdit(
+			consultantA,
+			fieldSurveyId,
+			trap.id,
+			{ ...form, fields: { ...form.fields, notes: 'Desk note' } },
+			db
+		);
 		version = 2;
 		const c = await conflict('Device note A');
 		const listed = await listConflicts(consultantA, fieldSurveyId, db);

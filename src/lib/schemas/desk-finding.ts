@@ -43,8 +43,14 @@ export const findingEditFormSchema = z
 			.default([])
 	})
 	// The kind's own fields (the Walk's keys) as text; the capture builder reads them.
-	.catchall(z.string({ error: 'Each field must be text' }).max(4000, { error: 'Too long' }));
-export type FindingEditForm = z.infer<typeof findingEditFormSchema>;
+	.catchall(z.string({ error: 'Each field must be text' }).max(4000, { error: 'Too long' }))
+	.transform(({ version, repairCost, layers, ...fields }) => ({
+		version,
+		repairCost,
+		layers,
+		fields: fields as Record<string, string>
+	}));
+export type FindingEditForm = z.output<typeof findingEditFormSchema>;
 
 export const reviewFormSchema = z.object({
 	reviewed: z.enum(['yes', 'no'], { error: 'Say whether the finding is reviewed' })

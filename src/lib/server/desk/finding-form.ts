@@ -147,9 +147,9 @@ export function captureFromForm(
 ): FormCapture {
 	const ctx = formContext(site, existing, now);
 	const fields = fieldsFor(existing.kind, ctx.system);
-	const { version: _v, repairCost: costText, layers: rows, ...typed } = form;
+	const { repairCost: costText, layers: rows, fields: typed } = form;
 	const values: FormValues = {
-		...(typed as Record<string, string>),
+		...typed,
 		photoIds: JSON.stringify(existing.photoIds)
 	};
 	const problems: Problems = {};
