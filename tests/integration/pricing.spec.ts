@@ -231,6 +231,10 @@ describe('a new cost basis', () => {
 			'engine'
 		);
 		expect(await repriceSite(db, siteA, { all: false })).toBe(1);
+		// Many small batches worked two at a time count and write every finding once.
+		expect(await repriceSite(db, siteA, { batchSize: 5 })).toBe(12);
+		expect(await recomputeSite(db, siteA, { batchSize: 5 })).toBe(12);
+		for (const row of await rows(fieldA)) expect(figureState(row, history[0].id)).toBe('current');
 		const [fixed] = (await rows(fieldA)).filter((r) => r.id === one.id);
 		expect(figureState(fixed, history[0].id)).toBe('current');
 	});
