@@ -1,5 +1,6 @@
 /** Authorization matrix entries for the Desk's the findings review, its API and conflicts (see authorization-matrix.table.ts). */
 import { type Case, deskAction, deskPage, mine } from './support/matrix-kit';
+import type { Tenant } from './support/tenants';
 
 /** No finding has this id: the bulk review refuses it (400) without writing anything. */
 const noSuchFinding = '00000000-0000-4000-8000-0000000000f1';
@@ -28,6 +29,51 @@ const reviewTable: Record<string, Record<string, Case>> = {
 };
 // ── end helper-table ─────────────────────────────────────────────────────────────────────
 
+// ── helper-detail: one finding in detail, and sync conflicts ─────────────────────────────
+const findingPath = (t: Tenant) => `/desk/surveys/${t.findingSurveyId}/findings/${t.findingId}`;
+const conflictsPath = (t: Tenant) => `/desk/surveys/${t.findingSurveyId}/conflicts`;
+const conflictPath = (t: Tenant) => `${conflictsPath(t)}/${t.conflictId}`;
+/** An action refused before anything is written (own firm), hidden across firms. */
+const refusedAction = deskAction({ own: 400, other: 404 }, { own: 400, other: 404 });
+const staffPage = { ...deskPage, admin: mine, consultant: mine };
+
+const findingDetail: Record<string, Record<string, Case>> = {
+	'/(desk)/desk/surveys/[surveyId]/findings/[findingId]': {
+		GET: { request: (t) => ({ path: findingPath(t) }), expect: staffPage },
+		// Only the version: every input is missing, so the edit is refused field by field.
+		'POST ?/edit': {
+			request: (t) => ({ path: findingPath(t), form: { version: '1' } }),
+			expect: refusedAction
+		},
+		// Marking not reviewed what is not reviewed changes nothing: harmless to repeat.
+		'POST ?/review': {
+			request: (t) => ({ path: findingPath(t), form: { reviewed: 'no' } }),
+			expect: deskAction({ own: 200, other: 404 }, { own: 200, other: 404 })
+		}
+	},
+	'/(desk)/desk/surveys/[surveyId]/conflicts': {
+		GET: { request: (t) => ({ path: conflictsPath(t) }), expect: staffPage }
+	},
+	'/(desk)/desk/surveys/[surveyId]/conflicts/[conflictId]': {
+		GET: { request: (t) => ({ path: conflictPath(t) }), expect: staffPage },
+		// Version 0 is no version a finding has: refused before anything is settled.
+		'POST ?/keepServer': {
+			request: (t) => ({ path: conflictPath(t), form: { version: '0' } }),
+			expect: refusedAction
+		},
+		'POST ?/keepDevice': {
+			request: (t) => ({ path: conflictPath(t), form: { version: '0' } }),
+			expect: refusedAction
+		},
+		'POST ?/merge': {
+			request: (t) => ({ path: conflictPath(t), form: { version: '0' } }),
+			expect: refusedAction
+		}
+	}
+};
+// ── end helper-detail ────────────────────────────────────────────────────────────────────
+
 export const deskReviewMatrix: Record<string, Record<string, Case>> = {
-	...reviewTable
+	...reviewTable,
+	...findingDetail
 };

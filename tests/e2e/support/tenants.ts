@@ -31,6 +31,11 @@ export interface Tenant {
 	/** The demo survey in the field (the tenant's auditor is assigned to it). */
 	surveyId: string;
 	targetUserId: string;
+	/** A finding on the brewhouse survey, and a device's deletion of it kept as a conflict. */
+	findingId: string;
+	conflictId: string;
+	/** The survey they are on. */
+	findingSurveyId: string;
 	invitationId: string;
 	messageId: string;
 	/** Text that may appear only in answers to this firm's people. */
@@ -63,7 +68,10 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		otherSurvey: hex(index, 3),
 		clientSurvey: hex(index, 4),
 		target: hex(index, 5),
-		invitation: hex(index, 6)
+		invitation: hex(index, 6),
+		finding: hex(index, 7),
+		conflict: hex(index, 8),
+		conflictMutation: hex(index, 9)
 	};
 	const names = {
 		otherClient: `${tag} Matrix Brewery`,
@@ -107,6 +115,45 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		 ON DUPLICATE KEY UPDATE revoked = 0, used_at = NULL, expires_at = NOW(3) + INTERVAL 1 DAY`,
 		[ids.invitation, firm.id, randomBytes(32).toString('hex'), names.invitationEmail]
 	);
+	// On the brewhouse survey (published, of the other client), so no page or count of the
+	// demo survey or the demo client changes: a bare tank wall with its own temperature.
+	await db.query(
+		`INSERT INTO findings (id, survey_id, kind, location, notes, inputs, photo_ids)
+		 VALUES (?, ?, 'insulation', ?, '', ?, '[]')
+		 ON DUPLICATE KEY UPDATE deleted_at = NULL`,
+		[
+			ids.finding,
+			ids.otherSurvey,
+			`${tag} matrix tank wall`,
+			JSON.stringify({
+				item: 'surface',
+				area: 2,
+				height: 1.5,
+				processTemperature: 400,
+				ambientTemperature: 293.15,
+				windSpeed: 0,
+				layers: [{ thickness: 0.05, material: 'mineral-wool' }],
+				jacketEmissivity: 0.1,
+				bareEmissivity: 0.9
+			})
+		]
+	);
+	const auditor = demoUsers.find((u) => u.firmId === firm.id && u.role === 'auditor')!;
+	await db.query(
+		`INSERT INTO finding_conflicts (id, firm_id, survey_id, finding_id, user_id, device_id,
+		   mutation_id, base_version, server_version, data)
+		 VALUES (?, ?, ?, ?, ?, ?, ?, 0, 1, NULL)
+		 ON DUPLICATE KEY UPDATE resolved_at = NULL, resolved_by = NULL, resolution_kind = NULL`,
+		[
+			ids.conflict,
+			firm.id,
+			survey.id,
+			ids.finding,
+			auditor.id,
+			ids.conflictMutation,
+			ids.conflictMutation
+		]
+	);
 	const raw: Buffer = await new MailComposer({
 		from: 'Steamwisp <no-reply@steamwisp.invalid>',
 		to: names.invitationEmail,
@@ -138,6 +185,9 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		siteId: site.id,
 		surveyId: survey.id,
 		targetUserId: ids.target,
+		findingId: ids.finding,
+		conflictId: ids.conflict,
+		findingSurveyId: ids.otherSurvey,
 		invitationId: ids.invitation,
 		messageId: message.id,
 		markers: [
