@@ -1,0 +1,230 @@
+/**
+ * The Desk, measured (part of `npm run bench`, after bench-walk.sh has built the app), on a
+ * fresh database of its own (steamwisp_bench_desk) with the demo scenario:
+ * 1. the review table's API at 10,000 findings in one survey: autocannon, 20 connections, a
+ *    consultant's session, four views (default, cost biggest first, kind + text search, page
+ *    100) — p50/p95/p99 latency and requests per second (target p95 ≤ 100 ms);
+ * 2. re-pricing a site of 100,000 findings after a cost-basis change (saveCostBasis, money from
+ *    stored flows; target ≤ 5 s);
+ * 3. recomputing the same 100,000 from their inputs (recomputeSite).
+ * Figures are printed; nothing is asserted.
+ */
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import autocannon from 'autocannon';
+import { drizzle } from 'drizzle-orm/mysql2';
+import mysql from 'mysql2/promise';
+import * as schema from '../src/lib/server/db/schema';
+import { saveCostBasis } from '../src/lib/server/pricing/cost-basis';
+import { recomputeSite } from '../src/lib/server/pricing/refresh';
+import { creameryAreas } from '../src/lib/server/seed/areas';
+import { demoFirms, demoPassword, demoSites, demoUsers } from '../src/lib/server/seed/demo';
+import { creameryCostBasis } from '../src/lib/server/seed/findings';
+import { waitForApp } from './bench-app';
+import { insertBenchFindings } from './bench-desk-rows';
+import { databaseUrl } from './env';
+
+const DB_NAME = process.env.STEAMWISP_BENCH_DESK_DB_NAME ?? 'steamwisp_bench_desk';
+const PORT = Number(process.env.STEAMWISP_BENCH_DESK_PORT ?? 4185);
+const ORIGIN = `http://127.0.0.1:${PORT}`;
+const TABLE_FINDINGS = 10_000;
+const SITE_FINDINGS = 100_000;
+const SECONDS_PER_VIEW = 5;
+const CONSULTANT = 'consultant@cinderbrook.example';
+const firmId = demoFirms[0].id;
+const actorId = demoUsers.find((u) => u.email === CONSULTANT)!.id;
+const tableSurvey = 'be4c0000-0000-4000-8000-000000000001';
+const bigSite = 'be4c0000-0000-4000-8000-000000000002';
+const bigSurvey = 'be4c0000-0000-4000-8000-000000000003';
+const bigHeaders = ['be4c0000-0000-4000-8000-000000000004', 'be4c0000-0000-4000-8000-000000000005'];
+
+function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env) {
+	const r = spawnSync(command, args, { env, stdio: ['ignore', 'ignore', 'inherit'] });
+	if (r.status !== 0) throw new Error(`${command} ${args.join(' ')} failed (${r.status})`);
+}
+
+const dbWasRunning =
+	spawnSync('bash', ['scripts/db.sh', 'status'], { stdio: 'ignore' }).status === 0;
+const { STEAMWISP_DB_NAME: _unset, ...withoutName } = process.env;
+run('bash', ['scripts/db.sh', 'fresh', DB_NAME], withoutName);
+process.env.STEAMWISP_DB_NAME = DB_NAME;
+run('npx', ['tsx', 'scripts/migrate.ts']);
+run('npx', ['tsx', 'scripts/seed.ts']);
+if (!existsSync('build/index.js')) run('node_modules/.bin/vite', ['build', '--logLevel', 'error']);
+
+const pool = mysql.createPool({ uri: databaseUrl(), connectionLimit: 4, timezone: 'Z' });
+const db = drizzle(pool, { schema, mode: 'default' });
+
+async function tableFixtures() {
+	const site = demoSites[0];
+	await db.insert(schema.surveys).values({
+		id: tableSurvey,
+		firmId,
+		siteId: site.id,
+		name: 'Larkspindle Creamery — benchmark survey of 10,000 findings',
+		status: 'in-review'
+	});
+	const t0 = performance.now();
+	await insertBenchFindings(
+		db,
+		{
+			siteId: site.id,
+			surveyId: tableSurvey,
+			headerIds: site.headers.map((h) => h.id),
+			areaIds: Object.values(creameryAreas).map((a) => a.id),
+			tags: true,
+			prefix: 'BT'
+		},
+		TABLE_FINDINGS
+	);
+	return performance.now() - t0;
+}
+
+async function bigSiteFixtures() {
+	await db.insert(schema.sites).values({
+		id: bigSite,
+		firmId,
+		clientCompanyId: demoSites[0].clientCompanyId,
+		name: 'Benchmark works (100,000 findings)',
+		elevation: 120
+	});
+	await db.insert(schema.headers).values([
+		{ id: bigHeaders[0], siteId: bigSite, name: 'HP 10 bar', pressure: 1.1 },
+		{ id: bigHeaders[1], siteId: bigSite, name: 'LP 3 bar', pressure: 0.4 }
+	]);
+	await saveCostBasis(db, {
+		firmId,
+		siteId: bigSite,
+		actorId,
+		basis: creameryCostBasis,
+		note: 'bench'
+	});
+	await db.insert(schema.surveys).values({
+		id: bigSurvey,
+		firmId,
+		siteId: bigSite,
+		name: 'Benchmark works survey',
+		status: 'in-review'
+	});
+	const t0 = performance.now();
+	await insertBenchFindings(
+		db,
+		{
+			siteId: bigSite,
+			surveyId: bigSurvey,
+			headerIds: bigHeaders,
+			areaIds: [],
+			tags: false,
+			prefix: 'BW'
+		},
+		SITE_FINDINGS
+	);
+	return performance.now() - t0;
+}
+
+async function signIn(): Promise<string> {
+	const res = await fetch(`${ORIGIN}/signin`, {
+		method: 'POST',
+		redirect: 'manual',
+		headers: { origin: ORIGIN, 'content-type': 'application/x-www-form-urlencoded' },
+		body: new URLSearchParams({ email: CONSULTANT, password: demoPassword })
+	});
+	const cookie = res.headers.getSetCookie().find((c) => c.startsWith('steamwisp_session='));
+	if (!cookie) throw new Error(`Sign-in failed (${res.status})`);
+	return cookie.split(';')[0];
+}
+
+const percentile = (sorted: number[], p: number) =>
+	sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+
+/** One view under load: latencies of every answer (autocannon's own table has no p95). */
+async function load(cookie: string, query: string) {
+	const url = `${ORIGIN}/api/surveys/${tableSurvey}/findings${query}`;
+	const check = await fetch(url, { headers: { cookie } });
+	const body = (await check.json()) as { total: number; items: unknown[] };
+	if (!check.ok) throw new Error(`${query} answered ${check.status}`);
+	const times: number[] = [];
+	const result = await new Promise<autocannon.Result>((resolve, reject) => {
+		const instance = autocannon(
+			{ url, connections: 20, duration: SECONDS_PER_VIEW, headers: { cookie } },
+			(err, res) => (err ? reject(err) : resolve(res))
+		);
+		instance.on('response', (_client, _status, _bytes, ms) => times.push(ms));
+	});
+	times.sort((a, b) => a - b);
+	return {
+		rows: `${body.items.length} of ${body.total}`,
+		p50: percentile(times, 50),
+		p95: percentile(times, 95),
+		p99: percentile(times, 99),
+		rps: result.requests.average,
+		failed: result.non2xx + result.errors
+	};
+}
+
+const ms = (v: number) => `${v.toFixed(1).padStart(6)} ms`;
+const seconds = (v: number) => `${(v / 1000).toFixed(2)} s`;
+
+const app = spawn('node', ['build'], {
+	env: {
+		...process.env,
+		HOST: '127.0.0.1',
+		PORT: String(PORT),
+		ORIGIN,
+		STEAMWISP_PHOTO_DIR: mkdtempSync(join(tmpdir(), 'steamwisp-bench-desk-photos-'))
+	},
+	stdio: ['ignore', 'ignore', 'inherit']
+});
+
+try {
+	const tableSetup = await tableFixtures();
+	await waitForApp(ORIGIN);
+	const cookie = await signIn();
+	const views: [string, string][] = [
+		['default (recorded, page 1)', ''],
+		['cost, biggest first', '?sort=cost'],
+		['traps + text "gallery 12"', '?kind=trap&q=gallery%2012'],
+		['page 100 of 200', '?page=100']
+	];
+	console.log(
+		`\nReview table API at ${TABLE_FINDINGS.toLocaleString('en-GB')} findings (inserted in ${seconds(tableSetup)}); 20 connections, ${SECONDS_PER_VIEW} s per view`
+	);
+	console.log(
+		`  view                          rows        p50        p95        p99     req/s   target p95 ≤ 100 ms`
+	);
+	for (const [name, query] of views) {
+		const r = await load(cookie, query);
+		console.log(
+			`  ${name.padEnd(28)} ${r.rows.padEnd(10)} ${ms(r.p50)} ${ms(r.p95)} ${ms(r.p99)} ${r.rps.toFixed(0).padStart(8)}${r.failed ? `   (${r.failed} failed)` : ''}`
+		);
+	}
+
+	const siteSetup = await bigSiteFixtures();
+	const t0 = performance.now();
+	const saved = await saveCostBasis(db, {
+		firmId,
+		siteId: bigSite,
+		actorId,
+		basis: { ...creameryCostBasis, fuel: { ...creameryCostBasis.fuel, price: '12.40' } },
+		note: 'bench: gas price up'
+	});
+	const reprice = performance.now() - t0;
+	const t1 = performance.now();
+	const recomputed = await recomputeSite(db, bigSite);
+	const recompute = performance.now() - t1;
+	console.log(
+		`\nA site of ${SITE_FINDINGS.toLocaleString('en-GB')} findings (inserted in ${seconds(siteSetup)})`
+	);
+	console.log(
+		`  re-priced after a cost-basis change:  ${seconds(reprice)}  (${saved.refreshed.toLocaleString('en-GB')} findings; saveCostBasis)   target ≤ 5 s`
+	);
+	console.log(
+		`  recomputed from their inputs:         ${seconds(recompute)}  (${Number(recomputed).toLocaleString('en-GB')} findings; recomputeSite)`
+	);
+} finally {
+	app.kill();
+	await pool.end();
+	if (!dbWasRunning) run('bash', ['scripts/db.sh', 'stop']);
+}
