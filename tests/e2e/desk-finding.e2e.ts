@@ -84,7 +84,8 @@ test('a consultant reads a finding, its photo and calculation, corrects it and s
 	page: p
 }) => {
 	test.setTimeout(90_000);
-	await signInHere(p, 'consultant@cinderbrook.example', demoPassword, page);
+	await signInHere(p, 'consultant@cinderbrook.example', demoPassword, '/desk');
+	await p.goto(page);
 	await expect(p.getByRole('heading', { level: 1 })).toContainText(`Desk detail test line ${run}`);
 	await expect(p.getByRole('note', { name: 'Safety cautions' })).toContainText(
 		'Keep clear of steam plumes'
