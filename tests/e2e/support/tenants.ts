@@ -143,11 +143,12 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		`INSERT INTO finding_conflicts (id, firm_id, survey_id, finding_id, user_id, device_id,
 		   mutation_id, base_version, server_version, data)
 		 VALUES (?, ?, ?, ?, ?, ?, ?, 0, 1, NULL)
-		 ON DUPLICATE KEY UPDATE resolved_at = NULL, resolved_by = NULL, resolution_kind = NULL`,
+		 ON DUPLICATE KEY UPDATE survey_id = VALUES(survey_id), resolved_at = NULL, resolved_by = NULL,
+		   resolution_kind = NULL`,
 		[
 			ids.conflict,
 			firm.id,
-			survey.id,
+			ids.otherSurvey,
 			ids.finding,
 			auditor.id,
 			ids.conflictMutation,
