@@ -211,15 +211,15 @@ try {
 		note: 'bench: gas price up'
 	});
 	const reprice = performance.now() - t0;
-	const t1 = performance.now();
-	const recomputed = await recomputeSite(db, bigSite);
-	const recompute = performance.now() - t1;
 	console.log(
 		`\nA site of ${SITE_FINDINGS.toLocaleString('en-GB')} findings (inserted in ${seconds(siteSetup)})`
 	);
 	console.log(
 		`  re-priced after a cost-basis change:  ${seconds(reprice)}  (${saved.refreshed.toLocaleString('en-GB')} findings; saveCostBasis)   target ≤ 5 s`
 	);
+	const t1 = performance.now();
+	const recomputed = await recomputeSite(db, bigSite);
+	const recompute = performance.now() - t1;
 	console.log(
 		`  recomputed from their inputs:         ${seconds(recompute)}  (${Number(recomputed).toLocaleString('en-GB')} findings; recomputeSite)`
 	);
