@@ -70,7 +70,10 @@ export function shownValue(
 		return ctx.headers.find((h) => h.id === value)?.name ?? 'a header not on this site';
 	if (key === 'areaId')
 		return ctx.areas?.find((a) => a.id === value)?.name ?? 'an area not on this site';
-	if (key === 'photoIds') return Array.isArray(value) ? `${value.length} photo(s)` : NOT_GIVEN;
+	if (key === 'photoIds') {
+		const n = Array.isArray(value) ? value.length : 0;
+		return n === 0 ? 'none' : n === 1 ? '1 photo' : `${n} photos`;
+	}
 	if (key === 'layers') return layersText(value, ctx);
 	const spec = specFor(fields, key);
 	if (typeof value === 'number') {

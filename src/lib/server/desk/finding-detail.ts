@@ -215,7 +215,8 @@ export async function photosOf(db: Executor, firmId: string, findingId: string, 
 			number: i + 1,
 			uploaded: p !== undefined,
 			caption: p?.caption ?? null,
-			takenAt: (p?.takenAt ?? p?.createdAt ?? null)?.toISOString() ?? null,
+			takenAt: p?.takenAt?.toISOString() ?? null,
+			uploadedAt: p?.createdAt.toISOString() ?? null,
 			width: p?.width ?? null,
 			height: p?.height ?? null
 		};
