@@ -42,7 +42,10 @@ function template(k: number): { kind: FindingInput['kind']; inputs: Record<strin
 				trapType: TRAP_TYPES[k % 3],
 				dn: [15, 20, 25][Math.floor(k / 3) % 3],
 				condition: TRAP_CONDITIONS[k % TRAP_CONDITIONS.length],
-				discharge: k % 4 === 0 ? 'condensate-return' : 'atmosphere'
+				// A return at about 1 bar g (MPa absolute); the rest drain to atmosphere.
+				...(k % 4 === 0
+					? { discharge: 'condensate-return', backPressure: 0.2 }
+					: { discharge: 'atmosphere' })
 			}
 		};
 	}
@@ -68,7 +71,7 @@ const conditionOf = (t: ReturnType<typeof template>) =>
 			? String(t.inputs.sizeClass)
 			: null;
 
-/** Inserts `n` findings into the place's survey; returns how long the pricing of templates took. */
+/** Inserts `n` findings into the place's survey, in batches of 1,000. */
 export async function insertBenchFindings(db: Db, place: BenchPlace, n: number): Promise<void> {
 	const ctx = await pricingContext(db, place.siteId);
 	const TEMPLATES = 240;
