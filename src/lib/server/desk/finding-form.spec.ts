@@ -37,13 +37,13 @@ describe('the Desk edit form', () => {
 			site('US')
 		);
 		if (!('capture' in back)) throw new Error(JSON.stringify(back));
-		expect(back.capture.inputs.orificeDiameter).toBeCloseTo(0.003175, 12);
+		expect((back.capture as TrapCapture).inputs.orificeDiameter).toBeCloseTo(0.003175, 12);
 	});
 
 	it('carries over inputs the form has no field for', () => {
 		const withLoad = { ...trap, inputs: { ...trap.inputs, condensateLoad: 0.02 } };
 		const back = captureFromForm(withLoad, opened(site('SI'), withLoad), site('SI'));
-		expect('capture' in back && back.capture.inputs.condensateLoad).toBe(0.02);
+		expect('capture' in back && (back.capture as TrapCapture).inputs.condensateLoad).toBe(0.02);
 	});
 
 	it('names each bad field by its form name, in the person’s words', () => {
