@@ -17,6 +17,7 @@ import {
 	LEAK_SIZE_CLASSES,
 	TRAP_CONDITIONS
 } from '../../src/lib/schemas/finding-vocabulary';
+import type { CostBasis } from '../../src/lib/schemas/site';
 import * as schema from '../../src/lib/server/db/schema';
 import { markReviewed } from '../../src/lib/server/desk/review';
 import { demoFirms } from '../../src/lib/server/seed/demo';
@@ -46,7 +47,7 @@ const KINDS = ['trap', 'leak', 'insulation', 'header'] as const;
 const STATUS_CYCLE = ['draft', 'draft', 'draft', 'reviewed', 'published', 'declined'] as const;
 const t0 = Date.parse('2026-11-18T07:00:00Z');
 
-const basis = {
+const basis: CostBasis = {
 	fuel: { kind: 'natural-gas', price: '10.00', unit: 'GJ' },
 	currency: 'EUR',
 	boilerEfficiency: 0.8,
@@ -186,23 +187,19 @@ beforeAll(async () => {
 		}
 		await db.insert(schema.findings).values(row(p, survey, assetId));
 	}
-	await db
-		.insert(schema.findings)
-		.values({
-			...row(planned(0)),
-			id: deletedId,
-			location: 'Gallery deleted',
-			deletedAt: new Date()
-		});
-	await db
-		.insert(schema.findings)
-		.values({
-			...row(planned(1)),
-			id: otherFinding,
-			surveyId: otherSurvey,
-			status: 'draft',
-			reviewedAt: null
-		});
+	await db.insert(schema.findings).values({
+		...row(planned(0)),
+		id: deletedId,
+		location: 'Gallery deleted',
+		deletedAt: new Date()
+	});
+	await db.insert(schema.findings).values({
+		...row(planned(1)),
+		id: otherFinding,
+		surveyId: otherSurvey,
+		status: 'draft',
+		reviewedAt: null
+	});
 	const conflict = (findingId: string, n: number, resolved: boolean) => ({
 		id: id(10, n),
 		firmId,
