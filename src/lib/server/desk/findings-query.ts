@@ -9,11 +9,10 @@ import type { SQL } from 'drizzle-orm';
 import type { FindingsQuery, FindingSortKey } from '../../schemas/desk-findings';
 import { FINDING_CONDITIONS, NO_PLACE } from '../../schemas/desk-findings';
 import { FINDING_STATUSES } from '../../schemas/finding-vocabulary';
-import { ENGINE_VERSION } from '../../steam/version';
 import { areas, assets, costBases, findings as F } from '../db/schema';
 import { headers, sites, surveys } from '../db/schema';
 import type { Executor } from '../db/types';
-import { figuresCurrentSql, surveyBasisSql } from '../pricing/state';
+import { figuresCurrentSql, figuresOutOfDateSql, surveyBasisSql } from '../pricing/state';
 import { pageRows, type FindingItem } from './findings-rows';
 
 export type { FindingItem };
@@ -159,28 +158,28 @@ async function pageIds(db: Executor, surveyId: string, q: FindingsQuery): Promis
 const sumIf = (ok: SQL, column: SQL | typeof F.steamLoss) =>
 	sql<string | null>`SUM(CASE WHEN ${ok} THEN ${column} END)`;
 
-/** Not current, yet with figures a current one would have had (figureState ≠ none), in SQL. */
-const outOfDateSql = sql`NOT ${figuresCurrentSql} AND NOT (${F.physicsEngine} <=> ${ENGINE_VERSION} AND (${F.flows} IS NULL OR (${F.resultsEngine} IS NULL AND ${surveyBasisSql} IS NULL)))`;
-
-async function totalsOf(db: Executor, surveyId: string, q: FindingsQuery, currency: string) {
+/** Sums from findings_desk_idx alone (the basis in force is the survey's, passed as a value). */
+async function totalsOf(db: Executor, survey: SurveyPricing, q: FindingsQuery) {
+	const current = figuresCurrentSql(survey.basisId);
 	let query = db
 		.select({
 			total: sql<number>`COUNT(*)`,
-			steam: sumIf(figuresCurrentSql, sql`${F.steamLoss}`),
-			heat: sumIf(figuresCurrentSql, sql`${F.heatLoss}`),
-			fuel: sumIf(figuresCurrentSql, sql`${F.fuelEnergy}`),
-			cost: sumIf(figuresCurrentSql, sql`${F.cost}`),
-			co2: sumIf(figuresCurrentSql, sql`${F.co2}`),
-			water: sumIf(figuresCurrentSql, sql`${F.water}`),
+			steam: sumIf(current, sql`${F.steamLoss}`),
+			heat: sumIf(current, sql`${F.heatLoss}`),
+			fuel: sumIf(current, sql`${F.fuelEnergy}`),
+			cost: sumIf(current, sql`${F.cost}`),
+			co2: sumIf(current, sql`${F.co2}`),
+			water: sumIf(current, sql`${F.water}`),
 			repair: sql<string | null>`SUM(${F.repairCost})`,
-			outOfDate: sql<string | null>`SUM(CASE WHEN ${outOfDateSql} THEN 1 ELSE 0 END)`
+			outOfDate: sql<
+				string | null
+			>`SUM(CASE WHEN ${figuresOutOfDateSql(survey.basisId)} THEN 1 ELSE 0 END)`
 		})
 		.from(F)
-		.innerJoin(surveys, eq(surveys.id, F.surveyId))
-		.innerJoin(sites, eq(sites.id, surveys.siteId))
 		.$dynamic();
 	if (q.q) query = query.leftJoin(assets, eq(assets.id, F.assetId));
-	const [row] = await query.where(filterOf(surveyId, q));
+	const [row] = await query.where(filterOf(survey.id, q));
+	const currency = survey.currency;
 	const n = (v: string | number | null | undefined) => Number(v ?? 0);
 	return {
 		total: n(row?.total),
@@ -204,10 +203,7 @@ export async function findingsPage(
 	survey: SurveyPricing,
 	q: FindingsQuery
 ): Promise<FindingsPage> {
-	const [ids, counted] = await Promise.all([
-		pageIds(db, survey.id, q),
-		totalsOf(db, survey.id, q, survey.currency)
-	]);
+	const [ids, counted] = await Promise.all([pageIds(db, survey.id, q), totalsOf(db, survey, q)]);
 	const items = await pageRows(db, ids, survey);
 	return { items, total: counted.total, page: q.page, size: q.size, totals: counted.totals };
 }

@@ -17,11 +17,17 @@ export interface StampedFigures {
 	flows: unknown;
 }
 
-/** @param basisId the basis the finding's survey is priced on now (frozen, else the site's) */
-export function figureState(f: StampedFigures, basisId: string | null): FigureState {
+/**
+ * @param basisId the basis the finding's survey is priced on now (frozen, else the site's)
+ * A finding without money figures (the engine refused its inputs, or the site had no basis when
+ * it was priced — pricing_note says which) is 'none': there is no figure to mistake for current.
+ */
+export function figureState(
+	f: Omit<StampedFigures, 'flows'> & Partial<Pick<StampedFigures, 'flows'>>,
+	basisId: string | null
+): FigureState {
 	if (f.physicsEngine !== ENGINE_VERSION) return 'engine';
-	if (f.flows === null) return 'none';
-	if (f.resultsEngine === null) return basisId === null ? 'none' : 'basis';
+	if (f.resultsEngine === null) return 'none';
 	if (f.resultsEngine !== ENGINE_VERSION) return 'engine';
 	return f.pricedBasisId === basisId ? 'current' : 'basis';
 }
@@ -30,5 +36,14 @@ export function figureState(f: StampedFigures, basisId: string | null): FigureSt
 export const surveyBasisSql: SQL<string | null> =
 	sql`COALESCE(${surveys.costBasisId}, ${sites.costBasisId})`;
 
-/** 1 when the row's figures are current, in SQL (joins as above). */
-export const figuresCurrentSql: SQL<number> = sql`(${findings.physicsEngine} = ${ENGINE_VERSION} AND ${findings.resultsEngine} = ${ENGINE_VERSION} AND ${findings.pricedBasisId} <=> ${surveyBasisSql})`;
+/**
+ * 1 when the row's figures are current, in SQL — figureState's 'current'. `basis` is the basis
+ * in force: a value when the caller knows it (one survey), else surveyBasisSql (joins as above).
+ * Reads only columns of findings_desk_idx, so a survey's totals come from the index.
+ */
+export const figuresCurrentSql = (basis: SQL | string | null = surveyBasisSql): SQL<number> =>
+	sql`(${findings.physicsEngine} <=> ${ENGINE_VERSION} AND ${findings.resultsEngine} <=> ${ENGINE_VERSION} AND ${findings.pricedBasisId} <=> ${basis})`;
+
+/** 1 when the row has figures that are out of date — figureState's 'engine' or 'basis'. */
+export const figuresOutOfDateSql = (basis: SQL | string | null = surveyBasisSql): SQL<number> =>
+	sql`(NOT (${findings.physicsEngine} <=> ${ENGINE_VERSION}) OR (${findings.resultsEngine} IS NOT NULL AND NOT ${figuresCurrentSql(basis)}))`;
