@@ -181,31 +181,7 @@ export const findings = mysqlTable(
 		index('findings_seq_idx').on(t.changeSeq),
 		// The Desk's table sorts a survey's findings by these most often.
 		index('findings_survey_cost_idx').on(t.surveyId, t.cost),
-		index('findings_survey_status_idx').on(t.surveyId, t.status),
-		// Covers the review table's usual sorts, filters and totals, so a survey of 10,000
-		// findings is listed and summed from the index without reading its JSON-heavy rows.
-		index('findings_desk_idx').on(
-			t.surveyId,
-			t.deletedAt,
-			t.recordedAt,
-			t.kind,
-			t.status,
-			t.condition,
-			t.areaId,
-			t.headerId,
-			t.cost,
-			t.steamLoss,
-			t.heatLoss,
-			t.fuelEnergy,
-			t.co2,
-			t.water,
-			t.paybackYears,
-			t.repairCost,
-			t.reviewedAt,
-			t.physicsEngine,
-			t.resultsEngine,
-			t.pricedBasisId
-		)
+		index('findings_survey_status_idx').on(t.surveyId, t.status)
 	]
 );
 

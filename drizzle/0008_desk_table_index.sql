@@ -1,1 +1,0 @@
-CREATE INDEX `findings_desk_idx` ON `findings` (`survey_id`,`deleted_at`,`recorded_at`,`kind`,`status`,`condition`,`area_id`,`header_id`,`cost_minor`,`steam_kg_h`,`heat_kw`,`fuel_gj`,`co2_kg`,`water_m3`,`payback_years`,`repair_cost_minor`,`reviewed_at`,`physics_engine`,`results_engine`,`priced_basis_id`);
