@@ -3,8 +3,9 @@
  * deleted: findings and traps keep their area. Names are unique per site (areas_site_name_uq,
  * retired ones included; the collation ignores case), checked first for a clear message.
  */
-import { and, asc, eq, isNull, ne, sql } from 'drizzle-orm';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import { recordChange } from '../audit';
+import { listChange, sameName as siteListName } from './site-lists';
 import { db } from '../db';
 import { areas } from '../db/schema';
 import type { Tx } from '../db/types';
@@ -21,31 +22,9 @@ export function siteAreas(siteId: string) {
 export type AreaChange =
 	{ kind: 'done'; id: string } | { kind: 'duplicate'; retired: boolean } | { kind: 'missing' };
 
-async function sameName(tx: Tx, siteId: string, name: string, except?: string) {
-	const [hit] = await tx
-		.select({ id: areas.id, retiredAt: areas.retiredAt })
-		.from(areas)
-		.where(
-			and(
-				eq(areas.siteId, siteId),
-				sql`LOWER(${areas.name}) = LOWER(${name})`,
-				except ? ne(areas.id, except) : undefined
-			)
-		)
-		.limit(1)
-		.for('update');
-	return hit;
-}
-
-const audit = (user: SessionUser, id: string, action: string, before: unknown, after: unknown) => ({
-	firmId: user.firmId,
-	actorId: user.id,
-	entity: 'area',
-	entityId: id,
-	action,
-	before,
-	after
-});
+const sameName = (tx: Tx, siteId: string, name: string, except?: string) =>
+	siteListName(tx, areas, siteId, name, except);
+const audit = listChange('area');
 
 export async function addArea(
 	user: SessionUser,

@@ -4,9 +4,10 @@
  * without regard to case (so a finding's header name never means two things). A change of
  * pressure, temperature or hours recomputes that header's findings after the commit.
  */
-import { and, asc, eq, isNull, ne, sql } from 'drizzle-orm';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import type { HeaderInput } from '../../schemas/desk-headers';
 import { recordChange } from '../audit';
+import { listChange, sameName as siteListName } from './site-lists';
 import { db } from '../db';
 import { headers } from '../db/schema';
 import type { Tx } from '../db/types';
@@ -43,32 +44,9 @@ export type HeaderChange =
 	| { kind: 'duplicate'; retired: boolean }
 	| { kind: 'missing' };
 
-/** Another header of the site with this name (the collation ignores case). */
-async function sameName(tx: Tx, siteId: string, name: string, except?: string) {
-	const [hit] = await tx
-		.select({ id: headers.id, retiredAt: headers.retiredAt })
-		.from(headers)
-		.where(
-			and(
-				eq(headers.siteId, siteId),
-				sql`LOWER(${headers.name}) = LOWER(${name})`,
-				except ? ne(headers.id, except) : undefined
-			)
-		)
-		.limit(1)
-		.for('update');
-	return hit;
-}
-
-const audit = (user: SessionUser, id: string, action: string, before: unknown, after: unknown) => ({
-	firmId: user.firmId,
-	actorId: user.id,
-	entity: 'header',
-	entityId: id,
-	action,
-	before,
-	after
-});
+const sameName = (tx: Tx, siteId: string, name: string, except?: string) =>
+	siteListName(tx, headers, siteId, name, except);
+const audit = listChange('header');
 
 export async function addHeader(
 	user: SessionUser,

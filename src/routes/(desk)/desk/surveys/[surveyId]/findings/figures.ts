@@ -57,49 +57,48 @@ function quantity(column: FigureColumn, stored: number | null, system: UnitSyste
 	return formatQuantityParts(stored === null ? null : stored * scale, q, system).number;
 }
 
-/** One cell's text. */
-export function figureText(item: FindingItem, column: FigureColumn, system: UnitSystemId): string {
+/** The figures a row and the totals share (same names, same units; a row's may be missing). */
+type Figures = { currency: string; paybackYears?: number | null } & Record<
+	| 'steamKgH'
+	| 'heatKw'
+	| 'fuelGjYear'
+	| 'co2KgYear'
+	| 'waterM3Year'
+	| 'costMinor'
+	| 'repairCostMinor',
+	number | null
+>;
+
+/** One cell's text, for a row or the totals (totals have no payback: an empty cell). */
+function cellText(f: Figures, column: FigureColumn, system: UnitSystemId): string {
 	switch (column) {
 		case 'steam':
-			return quantity(column, item.steamKgH, system);
+			return quantity(column, f.steamKgH, system);
 		case 'heat':
-			return quantity(column, item.heatKw, system);
+			return quantity(column, f.heatKw, system);
 		case 'energy':
-			return quantity(column, item.fuelGjYear, system);
+			return quantity(column, f.fuelGjYear, system);
 		case 'co2':
-			return quantity(column, item.co2KgYear, system);
+			return quantity(column, f.co2KgYear, system);
 		case 'water':
-			return quantity(column, item.waterM3Year, system);
+			return quantity(column, f.waterM3Year, system);
 		case 'cost':
-			return money(item.costMinor, item.currency);
+			return money(f.costMinor, f.currency);
 		case 'repair':
-			return money(item.repairCostMinor, item.currency);
+			return money(f.repairCostMinor, f.currency);
 		case 'payback':
-			return item.paybackYears === null ? '—' : formatSignificant(item.paybackYears);
+			if (f.paybackYears === undefined) return '';
+			return f.paybackYears === null ? '—' : formatSignificant(f.paybackYears);
 	}
 }
 
-/** A total's text (totals have no payback). */
-export function totalText(t: FindingTotals, column: FigureColumn, system: UnitSystemId): string {
-	switch (column) {
-		case 'steam':
-			return quantity(column, t.steamKgH, system);
-		case 'heat':
-			return quantity(column, t.heatKw, system);
-		case 'energy':
-			return quantity(column, t.fuelGjYear, system);
-		case 'co2':
-			return quantity(column, t.co2KgYear, system);
-		case 'water':
-			return quantity(column, t.waterM3Year, system);
-		case 'cost':
-			return money(t.costMinor, t.currency);
-		case 'repair':
-			return money(t.repairCostMinor, t.currency);
-		case 'payback':
-			return '';
-	}
-}
+/** One row's cell. */
+export const figureText = (item: FindingItem, column: FigureColumn, system: UnitSystemId) =>
+	cellText(item, column, system);
+
+/** A total's cell. */
+export const totalText = (t: FindingTotals, column: FigureColumn, system: UnitSystemId) =>
+	cellText(t, column, system);
 
 /** Why a row's figures are not current, in words (null when they are). */
 export function staleWords(item: FindingItem): string | null {
