@@ -48,7 +48,11 @@ async function post(
 	try {
 		const r = await handler(routeEvent(user, routeId, request, params) as never);
 		if (isActionFailure(r)) {
-			return { kind: 'refused', status: r.status, data: r.data as unknown as Record<string, unknown> };
+			return {
+				kind: 'refused',
+				status: r.status,
+				data: r.data as unknown as Record<string, unknown>
+			};
 		}
 		return { kind: 'done', data: r as Record<string, unknown> };
 	} catch (e) {

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { pushResponseSchema, type PushResponse } from '../../src/lib/schemas/sync';
 import * as schema from '../../src/lib/server/db/schema';
 import { demoSites, demoSurveys } from '../../src/lib/server/seed/demo';
-import { creameryCostBasis, demoFindings } from '../../src/lib/server/seed/findings';
+import { demoFindings } from '../../src/lib/server/seed/findings';
 import { evaluateFinding } from '../../src/lib/steam/index';
 import { ENGINE_VERSION } from '../../src/lib/steam/version';
 import { testDatabase } from './db';
@@ -83,16 +83,22 @@ describe('a new finding, its edits and its deletion', () => {
 		expect(row.surveyId).toBe(fieldSurveyId);
 		expect(row.recordedBy).toBe(auditorA.id);
 		expect(row.changeSeq).toBeGreaterThan(Number(before.counter));
-		// The server's figures are the engine's on the site's basis, whatever a device sent.
+		// The server's figures are the engine's on the site's current basis (whichever version
+		// other tests left it at), whatever a device sent.
 		const site = demoSites[0];
+		const [current] = await db
+			.select({ id: schema.costBases.id, basis: schema.costBases.basis })
+			.from(schema.sites)
+			.innerJoin(schema.costBases, eq(schema.costBases.id, schema.sites.costBasisId))
+			.where(eq(schema.sites.id, site.id));
 		const expected = evaluateFinding(c, {
-			costBasis: creameryCostBasis,
+			costBasis: { ...current.basis, elevation: site.elevation },
 			headers: site.headers.map(({ id, name, pressure }) => ({ id, name, pressure }))
 		});
 		expect(row.resultsEngine).toBe(ENGINE_VERSION);
 		expect(row.steamLoss).toBeCloseTo(expected.steamLoss!, 9);
 		expect(row.cost).toBe(expected.cost.minor);
-		expect(row.pricedBasisId).toBe('5e7a000b-0000-4000-8000-000000000001');
+		expect(row.pricedBasisId).toBe(current.id);
 		// The trap's tag became an asset of the site, and the finding points at it.
 		const [asset] = await db
 			.select()
