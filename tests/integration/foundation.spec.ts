@@ -128,11 +128,20 @@ describe('demo findings', () => {
 		const { demoFindings } = await import('../../src/lib/server/seed/findings');
 		const stored = await db.select().from(schema.findings);
 		const [site] = await db.select().from(schema.sites).where(eq(schema.sites.id, demoSites[0].id));
-		const context = await pricingContext(db, site.id);
-		expect(context.costBasis, 'the demo site has a cost basis').not.toBeNull();
+		// Each survey's basis in force: a published one keeps its own, the rest the site's current
+		// (other specs may have saved a newer version by now).
+		const surveyRows = await db
+			.select()
+			.from(schema.surveys)
+			.where(eq(schema.surveys.siteId, site.id));
+		const contexts = new Map<string, Awaited<ReturnType<typeof pricingContext>>>();
+		for (const s of surveyRows)
+			contexts.set(s.id, await pricingContext(db, site.id, s.costBasisId));
 		for (const raw of demoFindings) {
 			const row = stored.find((f) => f.id === raw.id);
 			expect(row, raw.id).toBeDefined();
+			const context = contexts.get(raw.surveyId)!;
+			expect(context.costBasis, 'the demo site has a cost basis').not.toBeNull();
 			const fresh = evaluateFinding(findingSchema.parse(raw), context);
 			expect(row!.cost).toBe(fresh.cost.minor);
 			expect(row!.steamLoss).toBe(fresh.steamLoss);
