@@ -237,9 +237,15 @@ test('a whole round offline, kept through a closed page, then sent when the sign
 	const db = openTestDb();
 	try {
 		const kept = mine.filter((f) => f.id !== header.id);
-		const server = await query<{ id: string; version: number; results: string | object }>(
+		const server = await query<{
+			id: string;
+			version: number;
+			heat_kw: number;
+			steam_kg_h: number | null;
+			cost_minor: number;
+		}>(
 			db,
-			'SELECT id, version, results FROM findings WHERE id IN (?) AND deleted_at IS NULL',
+			'SELECT id, version, heat_kw, steam_kg_h, cost_minor FROM findings WHERE id IN (?) AND deleted_at IS NULL',
 			[kept.map((f) => f.id)]
 		);
 		expect(server.map((r) => r.id).sort()).toEqual(kept.map((f) => f.id).sort());
@@ -248,19 +254,15 @@ test('a whole round offline, kept through a closed page, then sent when the sign
 		).toEqual([]);
 		for (const f of kept) {
 			const row = server.find((r) => r.id === f.id)!;
-			const results = (typeof row.results === 'string' ? JSON.parse(row.results) : row.results) as {
-				heatLoss: number;
-				steamLoss: number | null;
-				cost: { amount: number };
-			};
 			const device = sent.findings.find((d) => d.id === f.id)!;
 			const engine = evaluateFinding(device.capture, {
 				costBasis: site.costBasis,
 				headers: site.headers
 			});
-			expect(results.heatLoss).toBeCloseTo(engine.heatLoss, 9);
-			expect(results.cost.amount).toBeCloseTo(engine.cost.amount, 6);
-			if (engine.steamLoss !== null) expect(results.steamLoss).toBeCloseTo(engine.steamLoss, 9);
+			// The server's typed figure columns (docs/desk.md, "Figures").
+			expect(row.heat_kw).toBeCloseTo(engine.heatLoss, 9);
+			expect(Number(row.cost_minor)).toBe(engine.cost.minor);
+			if (engine.steamLoss !== null) expect(row.steam_kg_h).toBeCloseTo(engine.steamLoss, 9);
 			expect(device.version).toBe(row.version);
 		}
 		const stored = await query<{ id: string; sha256: string; bytes: number }>(

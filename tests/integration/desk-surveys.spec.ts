@@ -140,6 +140,16 @@ async function cleanUp() {
 	if (devices.length > 0) {
 		await db.delete(schema.syncDevices).where(inArray(schema.syncDevices.deviceId, devices));
 	}
+	// The traps these pushes tagged: the Walk's tests expect the demo site's register alone.
+	const tagged = await db
+		.select({ id: schema.assets.id })
+		.from(schema.assets)
+		.where(like(schema.assets.tag, `${TAG}%`));
+	if (tagged.length > 0) {
+		const assetIds = tagged.map((a) => a.id);
+		await db.delete(schema.findings).where(inArray(schema.findings.assetId, assetIds));
+		await db.delete(schema.assets).where(inArray(schema.assets.id, assetIds));
+	}
 }
 
 beforeAll(cleanUp);
