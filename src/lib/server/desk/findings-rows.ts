@@ -88,7 +88,6 @@ function pageRowsQuery(db: Executor, ids: string[]) {
 			physicsEngine: F.physicsEngine,
 			resultsEngine: F.resultsEngine,
 			pricedBasisId: F.pricedBasisId,
-			noFlows: sql<number>`${F.flows} IS NULL`,
 			pricingNote: F.pricingNote,
 			photoCount: sql<number>`COALESCE(JSON_LENGTH(${F.photoIds}), 0)`,
 			conflictWaiting: sql<number>`${conflictWaiting(db)}`
@@ -121,7 +120,7 @@ const conditionWords = (c: string | null) =>
 			c);
 
 function itemOf(r: PageRow, survey: SurveyPricing): FindingItem {
-	const { pricedCurrency, noFlows, physicsEngine, resultsEngine, pricedBasisId, ...rest } = r;
+	const { pricedCurrency, physicsEngine, resultsEngine, pricedBasisId, ...rest } = r;
 	const kind = r.kind as FindingKind;
 	const status = r.status as FindingStatus;
 	return {
@@ -135,10 +134,7 @@ function itemOf(r: PageRow, survey: SurveyPricing): FindingItem {
 		reviewed: r.reviewedAt !== null,
 		recordedAt: r.recordedAt?.toISOString() ?? null,
 		currency: pricedCurrency ?? survey.currency,
-		figureState: figureState(
-			{ physicsEngine, resultsEngine, pricedBasisId, flows: Number(noFlows) === 1 ? null : {} },
-			survey.basisId
-		),
+		figureState: figureState({ physicsEngine, resultsEngine, pricedBasisId }, survey.basisId),
 		photoCount: Number(r.photoCount),
 		conflictWaiting: Number(r.conflictWaiting) === 1
 	};

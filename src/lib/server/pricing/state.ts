@@ -14,7 +14,6 @@ export interface StampedFigures {
 	physicsEngine: string | null;
 	resultsEngine: string | null;
 	pricedBasisId: string | null;
-	flows: unknown;
 }
 
 /**
@@ -22,10 +21,7 @@ export interface StampedFigures {
  * A finding without money figures (the engine refused its inputs, or the site had no basis when
  * it was priced — pricing_note says which) is 'none': there is no figure to mistake for current.
  */
-export function figureState(
-	f: Omit<StampedFigures, 'flows'> & Partial<Pick<StampedFigures, 'flows'>>,
-	basisId: string | null
-): FigureState {
+export function figureState(f: StampedFigures, basisId: string | null): FigureState {
 	if (f.physicsEngine !== ENGINE_VERSION) return 'engine';
 	if (f.resultsEngine === null) return 'none';
 	if (f.resultsEngine !== ENGINE_VERSION) return 'engine';
