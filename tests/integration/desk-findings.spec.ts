@@ -5,7 +5,7 @@
  * the rows inserted), out-of-date figures flagged, bad parameters refused with a message,
  * another firm's survey hidden, and bulk review writing only this survey's findings.
  */
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
 	FINDING_CONDITIONS,
@@ -20,6 +20,7 @@ import {
 import type { CostBasis } from '../../src/lib/schemas/site';
 import * as schema from '../../src/lib/server/db/schema';
 import { markReviewed } from '../../src/lib/server/desk/review';
+import { touchFirm } from '../../src/lib/server/sync/counter';
 import { demoFirms } from '../../src/lib/server/seed/demo';
 import { ENGINE_VERSION } from '../../src/lib/steam/version';
 import { GET } from '../../src/routes/api/surveys/[id]/findings/+server';
@@ -564,5 +565,74 @@ describe('bulk review', () => {
 		expect(await state(drafts)).toEqual(
 			expect.arrayContaining([expect.objectContaining({ reviewedAt: null })])
 		);
+	});
+});
+
+describe('kept views (findings-cache)', () => {
+	const costOf = async (findingId: string) =>
+		(
+			await db
+				.select({ cost: schema.findings.cost })
+				.from(schema.findings)
+				.where(eq(schema.findings.id, findingId))
+		)[0].cost;
+
+	it('serves a view again until the firm’s counter moves, then reads it afresh', async () => {
+		const target = plan.find((p) => p.cost !== null && !p.stale)!;
+		const before = await page('size=200');
+		const cost = await costOf(target.id);
+		// A write made outside the app (no change_seq, no touch) is not seen: the view was kept.
+		await db
+			.update(schema.findings)
+			.set({ cost: sql`${schema.findings.cost} + 1000` })
+			.where(eq(schema.findings.id, target.id));
+		try {
+			expect((await page('size=200')).totals.costMinor).toBe(before.totals.costMinor);
+			await touchFirm(db, firmId);
+			const fresh = await page('size=200');
+			expect(fresh.totals.costMinor).toBe(Number(before.totals.costMinor) + 1000);
+			// Rows are read each time: the page shows the row's new money either way.
+			expect(fresh.items.find((i) => i.id === target.id)!.costMinor).toBe(Number(cost) + 1000);
+		} finally {
+			await db.update(schema.findings).set({ cost }).where(eq(schema.findings.id, target.id));
+			await touchFirm(db, firmId);
+		}
+		expect((await page('size=200')).totals.costMinor).toBe(before.totals.costMinor);
+	});
+
+	it('shows a review at once in the stage filter, its count and its order', async () => {
+		const unchecked = await page('stage=unreviewed&size=200');
+		const picked = unchecked.items.slice(0, 2).map((i) => i.id);
+		expect(picked).toHaveLength(2);
+		const review = (reviewed: boolean) =>
+			markReviewed(db, {
+				firmId,
+				actorId: consultantA.id,
+				surveyId: survey,
+				findingIds: picked,
+				reviewed
+			});
+		await review(true);
+		try {
+			const after = await page('stage=unreviewed&size=200');
+			expect(after.total).toBe(unchecked.total - 2);
+			expect(after.items.map((i) => i.id)).toEqual(
+				unchecked.items.map((i) => i.id).filter((i) => !picked.includes(i))
+			);
+		} finally {
+			await review(false);
+		}
+		expect((await page('stage=unreviewed&size=200')).total).toBe(unchecked.total);
+	});
+
+	it('keeps views of different filters, orders and pages apart', async () => {
+		const all = await page('size=200&sort=steam&dir=desc');
+		const asc = await page('size=200&sort=steam&dir=asc');
+		expect(asc.items.map((i) => i.id)).not.toEqual(all.items.map((i) => i.id));
+		const traps = await page('kind=trap&size=200');
+		expect(traps.total).toBe(plan.filter((p) => p.kind === 'trap').length);
+		expect(traps.total).toBeLessThan(all.total);
+		const second = await page('size=5&page=2&sort=steam&dir=desc');
+		expect(second.items.map((i) => i.id)).toEqual(all.items.slice(5, 10).map((i) => i.id));
 	});
 });

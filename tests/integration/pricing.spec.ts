@@ -9,6 +9,8 @@ import { eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CostBasis } from '../../src/lib/schemas/site';
 import * as schema from '../../src/lib/server/db/schema';
+import { findingsQuerySchema } from '../../src/lib/schemas/desk-findings';
+import { findingsPage, surveyPricing } from '../../src/lib/server/desk/findings-query';
 import { demoFirms } from '../../src/lib/server/seed/demo';
 import {
 	saveCostBasis,
@@ -155,9 +157,18 @@ afterAll(async () => {
 	await pool.end();
 });
 
+/** The review table's totals of a survey (its kept view, findings-cache, when one is kept). */
+async function tableTotals(surveyId: string) {
+	const survey = (await surveyPricing(db, surveyId))!;
+	return (await findingsPage(db, survey, findingsQuerySchema.parse({}))).totals;
+}
+const sum = (values: (number | null)[]) => values.reduce<number>((a, v) => a + (v ?? 0), 0);
+
 describe('a new cost basis', () => {
 	it('re-prices every finding of its site onto the new version, and no other site', async () => {
 		const before = { A: await rows(fieldA), P: await rows(publishedA), B: await rows(fieldB) };
+		// The table has a view of the survey before the save (kept under the firm's counter).
+		expect((await tableTotals(fieldA)).costMinor).toBe(sum(before.A.map((r) => r.cost)));
 		expect(before.A.every((r) => r.cost! > 0 && r.pricedBasisId !== null)).toBe(true);
 		const dearer = { ...basis, fuel: { ...basis.fuel, price: '20.00' }, operatingHours: 6000 };
 		const saved = await saveCostBasis(db, {
@@ -191,6 +202,10 @@ describe('a new cost basis', () => {
 			expect(row.changeSeq).toBe(old.changeSeq);
 			expect(figureState(row, saved.id)).toBe('current');
 		}
+		// The table shows the new money at once, not its kept view of the old.
+		const table = await tableTotals(fieldA);
+		expect(table.costMinor).toBe(sum(after.map((r) => r.cost)));
+		expect(table.costMinor).not.toBe(sum(before.A.map((r) => r.cost)));
 		// The other site and the published survey are untouched.
 		expect(await rows(fieldB)).toEqual(before.B);
 		expect(await rows(publishedA)).toEqual(before.P);
@@ -252,8 +267,14 @@ describe('a new cost basis', () => {
 
 		const before = await rows(fieldA);
 		const published = await rows(publishedA);
+		const steamBefore = (await tableTotals(fieldA)).steamKgH;
+		expect(steamBefore).toBeCloseTo(sum(before.map((r) => r.steamLoss)), 9);
 		await db.update(schema.headers).set({ pressure: 2.1 }).where(eq(schema.headers.id, headerA1));
 		const n = await recomputeSite(db, siteA, { headerId: headerA1 });
+		// The recompute moved the firm's counter: the table reads the new steam, not its kept view.
+		const steamAfter = (await tableTotals(fieldA)).steamKgH;
+		expect(steamAfter).toBeCloseTo(sum((await rows(fieldA)).map((r) => r.steamLoss)), 9);
+		expect(steamAfter).toBeGreaterThan(steamBefore);
 		expect(n).toBe(plan.filter((p) => p.headerId === headerA1 && p.surveyId === fieldA).length);
 		for (const row of await rows(fieldA)) {
 			const old = before.find((b) => b.id === row.id)!;

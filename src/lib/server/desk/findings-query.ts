@@ -1,18 +1,21 @@
 /**
  * The Desk's review table: one survey's findings sorted, filtered, searched and paged in SQL
  * over the typed figure columns, with the filtered set's totals. Two steps, as the sync feed
- * does: the page's ids first (only the joins the sort or search needs), then the page's rows,
- * so a survey of 10,000 findings never reads its JSON columns to sort them.
+ * does: the view's ids in order first (only the joins the sort or search needs), then the page's
+ * rows, so a survey of 10,000 findings never reads its JSON columns to sort them. The ordered
+ * ids and the totals of a view are kept between requests (findings-cache), keyed on the firm's
+ * change counter: a page of a view already seen costs one query for its rows.
  */
 import { and, asc, desc, eq, inArray, isNotNull, isNull, like, or, sql } from 'drizzle-orm';
 import type { SQL } from 'drizzle-orm';
 import type { FindingsQuery, FindingSortKey } from '../../schemas/desk-findings';
 import { FINDING_CONDITIONS, NO_PLACE } from '../../schemas/desk-findings';
 import { FINDING_STATUSES } from '../../schemas/finding-vocabulary';
-import { areas, assets, costBases, findings as F } from '../db/schema';
+import { areas, assets, changeCounters, costBases, findings as F } from '../db/schema';
 import { headers, sites, surveys } from '../db/schema';
 import type { Executor } from '../db/types';
 import { figuresCurrentSql, figuresOutOfDateSql, surveyBasisSql } from '../pricing/state';
+import { VIEW_CACHE_IDS, VIEW_CACHE_TOTALS, viewCache } from './findings-cache';
 import { pageRows, type FindingItem } from './findings-rows';
 
 export type { FindingItem };
@@ -25,6 +28,8 @@ export interface SurveyPricing {
 	basisId: string | null;
 	/** Its currency (the site's when there is no basis). */
 	currency: string;
+	/** The firm's change counter as it stood when read (0 before the firm's first change). */
+	revision: number;
 }
 
 /** The survey's name and the basis its figures count as current on. */
@@ -38,15 +43,18 @@ export async function surveyPricing(db: Executor, surveyId: string): Promise<Sur
 			basisCurrency: sql<
 				string | null
 			>`(SELECT JSON_UNQUOTE(JSON_EXTRACT(${costBases.basis}, '$.currency')) FROM ${costBases} WHERE ${costBases.id} = ${surveyBasisSql})`,
-			siteCurrency: sites.currency
+			siteCurrency: sites.currency,
+			revision: sql<
+				string | number | null
+			>`(SELECT ${changeCounters.value} FROM ${changeCounters} WHERE ${changeCounters.firmId} = ${surveys.firmId})`
 		})
 		.from(surveys)
 		.innerJoin(sites, eq(sites.id, surveys.siteId))
 		.where(eq(surveys.id, surveyId))
 		.limit(1);
 	if (!row) return null;
-	const { basisCurrency, siteCurrency, ...rest } = row;
-	return { ...rest, currency: basisCurrency ?? siteCurrency };
+	const { basisCurrency, siteCurrency, revision, ...rest } = row;
+	return { ...rest, currency: basisCurrency ?? siteCurrency, revision: Number(revision ?? 0) };
 }
 
 export interface FindingTotals {
@@ -142,16 +150,13 @@ function orderOf(q: FindingsQuery): SQL[] {
 	return [sql`${key} IS NULL`, q.dir === 'asc' ? asc(key) : desc(key), asc(F.id)];
 }
 
-async function pageIds(db: Executor, surveyId: string, q: FindingsQuery): Promise<string[]> {
+/** Every id of the view, in its order (a page is a slice of it). */
+async function viewIds(db: Executor, surveyId: string, q: FindingsQuery): Promise<string[]> {
 	let query = db.select({ id: F.id }).from(F).$dynamic();
 	if (q.q || q.sort === 'tag') query = query.leftJoin(assets, eq(assets.id, F.assetId));
 	if (q.sort === 'area') query = query.leftJoin(areas, eq(areas.id, F.areaId));
 	if (q.sort === 'header') query = query.leftJoin(headers, eq(headers.id, F.headerId));
-	const rows = await query
-		.where(filterOf(surveyId, q))
-		.orderBy(...orderOf(q))
-		.limit(q.size)
-		.offset((q.page - 1) * q.size);
+	const rows = await query.where(filterOf(surveyId, q)).orderBy(...orderOf(q));
 	return rows.map((r) => r.id);
 }
 
@@ -159,7 +164,7 @@ const sumIf = (ok: SQL, column: SQL | typeof F.steamLoss) =>
 	sql<string | null>`SUM(CASE WHEN ${ok} THEN ${column} END)`;
 
 /** Sums from findings_desk_idx alone (the basis in force is the survey's, passed as a value). */
-async function totalsOf(db: Executor, survey: SurveyPricing, q: FindingsQuery) {
+async function totalsOf(db: Executor, survey: SurveyPricing, q: FindingsQuery): Promise<Counted> {
 	const current = figuresCurrentSql(survey.basisId);
 	let query = db
 		.select({
@@ -197,13 +202,42 @@ async function totalsOf(db: Executor, survey: SurveyPricing, q: FindingsQuery) {
 	};
 }
 
+interface Counted {
+	total: number;
+	totals: FindingTotals;
+}
+
+const idViews = viewCache<string[]>({ maxSize: VIEW_CACHE_IDS, size: (ids) => ids.length + 1 });
+const totalViews = viewCache<Counted>({ max: VIEW_CACHE_TOTALS });
+
+/** What a filter's answer depends on: the survey, its basis, the counter, the filter itself. */
+function filterKey(survey: SurveyPricing, q: FindingsQuery): string {
+	const set = (values: string[]) => [...new Set(values)].sort();
+	return JSON.stringify([
+		survey.id,
+		survey.basisId,
+		survey.revision,
+		set(q.kind),
+		set(q.area),
+		set(q.header),
+		set(q.condition),
+		set(q.stage),
+		q.q
+	]);
+}
+
 /** One page of a survey's findings, as `GET /api/surveys/[id]/findings` answers it. */
 export async function findingsPage(
 	db: Executor,
 	survey: SurveyPricing,
 	q: FindingsQuery
 ): Promise<FindingsPage> {
-	const [ids, counted] = await Promise.all([pageIds(db, survey.id, q), totalsOf(db, survey, q)]);
-	const items = await pageRows(db, ids, survey);
+	const filter = filterKey(survey, q);
+	const [ids, counted] = await Promise.all([
+		idViews(`${filter}|${q.sort}|${q.dir}`, () => viewIds(db, survey.id, q)),
+		totalViews(filter, () => totalsOf(db, survey, q))
+	]);
+	const start = (q.page - 1) * q.size;
+	const items = await pageRows(db, ids.slice(start, start + q.size), survey);
 	return { items, total: counted.total, page: q.page, size: q.size, totals: counted.totals };
 }

@@ -78,9 +78,6 @@ function pageRowsQuery(db: Executor, ids: string[]) {
 			heatKw: F.heatLoss,
 			fuelGjYear: F.fuelEnergy,
 			costMinor: F.cost,
-			pricedCurrency: sql<
-				string | null
-			>`JSON_UNQUOTE(JSON_EXTRACT(${costBases.basis}, '$.currency'))`,
 			co2KgYear: F.co2,
 			waterM3Year: F.water,
 			repairCostMinor: F.repairCost,
@@ -96,17 +93,42 @@ function pageRowsQuery(db: Executor, ids: string[]) {
 		.leftJoin(assets, eq(assets.id, F.assetId))
 		.leftJoin(areas, eq(areas.id, F.areaId))
 		.leftJoin(headers, eq(headers.id, F.headerId))
-		.leftJoin(costBases, eq(costBases.id, F.pricedBasisId))
 		.where(inArray(F.id, ids));
+}
+
+/**
+ * The currency each row's money is in: the survey's for rows priced on its basis (nearly all),
+ * else that basis's own, read once per page for the few out-of-date ones.
+ */
+async function currencies(db: Executor, rows: PageRow[], survey: SurveyPricing) {
+	const others = [
+		...new Set(
+			rows.flatMap((r) =>
+				r.pricedBasisId && r.pricedBasisId !== survey.basisId ? [r.pricedBasisId] : []
+			)
+		)
+	];
+	const found = others.length
+		? await db
+				.select({
+					id: costBases.id,
+					currency: sql<string | null>`JSON_UNQUOTE(JSON_EXTRACT(${costBases.basis}, '$.currency'))`
+				})
+				.from(costBases)
+				.where(inArray(costBases.id, others))
+		: [];
+	const byBasis = new Map(found.map((b) => [b.id, b.currency ?? survey.currency]));
+	return (r: PageRow) => (r.pricedBasisId && byBasis.get(r.pricedBasisId)) || survey.currency;
 }
 
 export async function pageRows(db: Executor, ids: string[], survey: SurveyPricing) {
 	if (ids.length === 0) return [];
 	const rows = await pageRowsQuery(db, ids);
+	const currencyOf = await currencies(db, rows, survey);
 	const byId = new Map(rows.map((r) => [r.id, r]));
 	return ids.flatMap((id) => {
 		const r = byId.get(id);
-		return r ? [itemOf(r, survey)] : [];
+		return r ? [itemOf(r, survey, currencyOf(r))] : [];
 	});
 }
 
@@ -119,8 +141,8 @@ const conditionWords = (c: string | null) =>
 			(LEAK_SIZE_CLASS_LABELS as Record<string, string>)[c] ??
 			c);
 
-function itemOf(r: PageRow, survey: SurveyPricing): FindingItem {
-	const { pricedCurrency, physicsEngine, resultsEngine, pricedBasisId, ...rest } = r;
+function itemOf(r: PageRow, survey: SurveyPricing, currency: string): FindingItem {
+	const { physicsEngine, resultsEngine, pricedBasisId, ...rest } = r;
 	const kind = r.kind as FindingKind;
 	const status = r.status as FindingStatus;
 	return {
@@ -133,7 +155,7 @@ function itemOf(r: PageRow, survey: SurveyPricing): FindingItem {
 		statusWords: FINDING_STATUS_LABELS[status] ?? r.status,
 		reviewed: r.reviewedAt !== null,
 		recordedAt: r.recordedAt?.toISOString() ?? null,
-		currency: pricedCurrency ?? survey.currency,
+		currency,
 		figureState: figureState({ physicsEngine, resultsEngine, pricedBasisId }, survey.basisId),
 		photoCount: Number(r.photoCount),
 		conflictWaiting: Number(r.conflictWaiting) === 1

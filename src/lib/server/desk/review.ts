@@ -5,12 +5,14 @@
  * row per finding that changed, in the same transaction.
  *
  * Neither the finding's version nor its change-feed position moves: the review is the Desk's,
- * no edit of the capture, so a device holding the finding is not put into conflict by it.
+ * no edit of the capture, so a device holding the finding is not put into conflict by it; the
+ * firm's counter moves on (touchFirm) so the review table's cached views expire.
  */
 import { and, eq, inArray, isNull } from 'drizzle-orm';
 import { recordChange } from '../audit';
 import { findings, surveys } from '../db/schema';
 import type { Db } from '../db/types';
+import { touchFirm } from '../sync/counter';
 
 export interface ReviewInput {
 	firmId: string;
@@ -77,6 +79,7 @@ export async function markReviewed(db: Db, input: ReviewInput): Promise<ReviewOu
 			});
 			changed++;
 		}
+		if (changed > 0) await touchFirm(tx, input.firmId); // the table's cached views expire
 		return { ok: true as const, changed, unchanged: rows.length - changed };
 	});
 }

@@ -16,6 +16,7 @@ import { and, asc, eq, inArray, isNull, ne, or, sql, type SQL } from 'drizzle-or
 import { ENGINE_VERSION } from '../../steam/version';
 import { assets, findings, sites, surveys } from '../db/schema';
 import type { Db, Executor, Tx } from '../db/types';
+import { touchSiteFirm } from '../sync/counter';
 import { captureFromRow } from '../walk/capture-row';
 import { pricingContext, type PricingContext } from './context';
 import { figureColumns, moneyColumns, prepareBasis, type PreparedBasis } from './figures';
@@ -133,6 +134,7 @@ export async function repriceSite(
 			return out.length;
 		});
 	}
+	if (count > 0) await touchSiteFirm(db, siteId);
 	return count;
 }
 
@@ -192,6 +194,7 @@ export async function recomputeSite(
 		);
 		count += await inBatches(db, ids, batchSize, (tx, batch) => recomputeBatch(tx, ctx, batch));
 	}
+	if (count > 0) await touchSiteFirm(db, siteId);
 	return count;
 }
 

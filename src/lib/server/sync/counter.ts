@@ -4,8 +4,8 @@
  */
 import { and, eq, sql } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
-import { changeCounters, surveyAuditors, syncTombstones } from '../db/schema';
-import type { Tx } from '../db/types';
+import { changeCounters, sites, surveyAuditors, syncTombstones } from '../db/schema';
+import type { Executor, Tx } from '../db/types';
 
 /**
  * Next change_seq of the firm, inside the caller's transaction. The counter row stays locked
@@ -25,6 +25,27 @@ export async function nextChangeSeq(tx: Tx, firmId: string): Promise<number> {
 	const next = Number(row.value) + 1;
 	await tx.update(changeCounters).set({ value: next }).where(eq(changeCounters.firmId, firmId));
 	return next;
+}
+
+/**
+ * Moves the firm's counter on by one with no row taking the value (a pull's cursor only ever
+ * lands on values rows carry, so it skips it). For writes that change what the Desk lists
+ * without giving rows a change_seq of their own — a review, a site re-priced or recomputed in
+ * batches — so the review table's cached views (keyed on the counter,
+ * $lib/server/desk/findings-cache) expire. Inside a transaction it locks the counter row until
+ * commit, as nextChangeSeq does; after batches, call it on its own.
+ */
+export async function touchFirm(db: Executor, firmId: string): Promise<void> {
+	await db
+		.insert(changeCounters)
+		.values({ firmId, value: 1 })
+		.onDuplicateKeyUpdate({ set: { value: sql`${changeCounters.value} + 1` } });
+}
+
+/** touchFirm for the firm that owns the site. */
+export async function touchSiteFirm(db: Executor, siteId: string): Promise<void> {
+	const [site] = await db.select({ firmId: sites.firmId }).from(sites).where(eq(sites.id, siteId));
+	if (site) await touchFirm(db, site.firmId);
 }
 
 /**
