@@ -13,7 +13,7 @@ import { FINDING_CONDITIONS, NO_PLACE } from '../../schemas/desk-findings';
 import { FINDING_STATUSES } from '../../schemas/finding-vocabulary';
 import { areas, assets, changeCounters, costBases, findings as F } from '../db/schema';
 import { headers, sites, surveys } from '../db/schema';
-import type { Executor } from '../db/types';
+import type { Executor, PooledDb } from '../db/types';
 import { figuresCurrentSql, figuresOutOfDateSql, surveyBasisSql } from '../pricing/state';
 import { VIEW_CACHE_IDS, VIEW_CACHE_TOTALS, viewCache } from './findings-cache';
 import { pageRows, type FindingItem } from './findings-rows';
@@ -228,7 +228,7 @@ function filterKey(survey: SurveyPricing, q: FindingsQuery): string {
 
 /** One page of a survey's findings, as `GET /api/surveys/[id]/findings` answers it. */
 export async function findingsPage(
-	db: Executor,
+	db: PooledDb,
 	survey: SurveyPricing,
 	q: FindingsQuery
 ): Promise<FindingsPage> {
