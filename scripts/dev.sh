@@ -5,8 +5,9 @@ cd "$ROOT"
 ensure_node_modules
 bash scripts/db.sh up
 npx tsx scripts/migrate.ts
+# As npm start: the development mailbox (Desk → Mailbox) unless a real mail server is set.
 if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
-	export STEAMWISP_MAIL_PORT="$MAIL_PORT"
+	export STEAMWISP_MAIL_PORT="$MAIL_PORT" STEAMWISP_DEV_MAILBOX=1
 	node --import tsx scripts/mail-fake.ts &
 	mail_pid=$!
 	trap 'kill "$mail_pid" 2>/dev/null || true' EXIT

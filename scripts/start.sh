@@ -32,13 +32,15 @@ export ORIGIN="${ORIGIN:-http://$APP_HOST:$APP_PORT}"
 export BODY_SIZE_LIMIT="${BODY_SIZE_LIMIT:-9M}"
 npx tsx scripts/seed.ts --print-sign-ins
 
-# E-mail goes to the local SMTP fake (scripts/mail-fake.ts) unless STEAMWISP_SMTP_URL names a real server.
+# E-mail goes to the local SMTP fake (scripts/mail-fake.ts) unless STEAMWISP_SMTP_URL names a real
+# server. The demo turns the development mailbox on (off by default: `node build` alone never
+# shows it); it shows every reset link sent for a firm to that firm's admins.
 if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
-	export STEAMWISP_MAIL_PORT="$MAIL_PORT"
+	export STEAMWISP_MAIL_PORT="$MAIL_PORT" STEAMWISP_DEV_MAILBOX=1
 	node --import tsx scripts/mail-fake.ts &
 	mail_pid=$!
 	trap 'kill "$mail_pid" 2>/dev/null || true' EXIT
-	say "e-mail stays on this machine (fake SMTP on 127.0.0.1:$MAIL_PORT); admins read it in Desk → Mailbox"
+	say "development mailbox on (STEAMWISP_DEV_MAILBOX=1): e-mail stays on this machine (fake SMTP on 127.0.0.1:$MAIL_PORT) and admins read it, reset links included, in Desk → Mailbox; not for production"
 fi
 say "Steamwisp is at $ORIGIN  (Ctrl-C stops the app; 'npm run db:stop' stops the database)"
 node build

@@ -17,6 +17,8 @@ if (testDbName === 'steamwisp') {
 }
 
 export const e2eMail = {
+	// The app sends to the fake and shows the development mailbox only when told to.
+	STEAMWISP_DEV_MAILBOX: '1',
 	STEAMWISP_MAIL_PORT: process.env.STEAMWISP_E2E_MAIL_PORT ?? '2526',
 	STEAMWISP_MAILBOX_DIR: resolve(import.meta.dirname, '../../../.data/mailbox-e2e')
 };

@@ -33,7 +33,8 @@ describe('the fake mailbox on disk', () => {
 		expect((await listMessages(dir, 'firm-a')).map((m) => m.subject)).toEqual(['first']);
 
 		const read = await readMessage(dir, b.id);
-		expect(read?.message.text).toBe('body of second');
+		expect(read?.message.text).toBe('body of second\n');
+		expect(read?.message.subject).toBe('second');
 		expect(read?.meta.firmId).toBe('firm-b');
 		expect((await readdir(dir)).filter((n) => n.endsWith('.tmp'))).toEqual([]);
 	});

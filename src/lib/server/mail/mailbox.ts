@@ -7,10 +7,9 @@
 import { randomBytes } from 'node:crypto';
 import { mkdir, readFile, readdir, rename, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { headerValue, parseHeaders, parseMessage, type ParsedMessage } from './mime';
+import { parseMessage, type ParsedMessage } from './parse';
 
-/** Set by the app on every message it hands to the fake, so Desk shows a firm only its own mail. */
-export const FIRM_HEADER = 'X-Steamwisp-Firm';
+export { FIRM_HEADER } from './parse';
 
 export interface StoredMessage {
 	id: string;
@@ -37,14 +36,14 @@ export async function saveMessage(
 ): Promise<StoredMessage> {
 	await mkdir(dir, { recursive: true });
 	const id = `${String(now.getTime()).padStart(13, '0')}-${randomBytes(4).toString('hex')}`;
-	const headers = parseHeaders(raw.toString('latin1'));
+	const parsed = await parseMessage(raw);
 	const meta: StoredMessage = {
 		id,
 		receivedAt: now.toISOString(),
 		mailFrom: envelope.mailFrom,
 		rcptTo: envelope.rcptTo,
-		subject: headerValue(headers, 'subject'),
-		firmId: headerValue(headers, FIRM_HEADER) || null,
+		subject: parsed.subject,
+		firmId: parsed.firmId,
 		bytes: raw.length
 	};
 	await writeFile(join(dir, `${id}.eml`), raw);
@@ -81,7 +80,7 @@ export async function readMessage(
 	const meta = await readMeta(dir, id);
 	if (!meta) return null;
 	const raw = await readFile(join(dir, `${id}.eml`));
-	return { meta, message: parseMessage(raw.toString('latin1')) };
+	return { meta, message: await parseMessage(raw) };
 }
 
 async function readMeta(dir: string, id: string): Promise<StoredMessage | null> {

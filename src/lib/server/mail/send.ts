@@ -1,22 +1,37 @@
 /**
  * Sends one message through nodemailer: to STEAMWISP_SMTP_URL in production, to the local SMTP
- * fake otherwise (see ./config.ts). The transport is made once per process.
+ * fake with STEAMWISP_DEV_MAILBOX=1, nowhere with neither (see ./config.ts). The transport is
+ * made once per process.
  */
 import nodemailer, { type Transporter } from 'nodemailer';
 import { env } from '$env/dynamic/private';
-import { FIRM_HEADER } from './mailbox';
+import { FIRM_HEADER } from './parse';
 import { mailConfig, type MailConfig } from './config';
 import type { RenderedMessage } from './templates/render';
 
-let cached: { config: MailConfig; transport: Transporter } | null = null;
+type Sending = Exclude<MailConfig, { mode: 'off' }>;
+let cached: { config: Sending; transport: Transporter } | null = null;
 
 export function currentMailConfig(): MailConfig {
 	return mailConfig(env);
 }
 
-function transport(): { config: MailConfig; transport: Transporter } {
+/** Thrown by sendMail when this server has no way to send mail (no SMTP, no dev mailbox). */
+export class MailOffError extends Error {
+	constructor() {
+		super('no mail is sent: set STEAMWISP_SMTP_URL (or STEAMWISP_DEV_MAILBOX=1 in development)');
+	}
+}
+
+/** Whether this server sends mail at all. */
+export function mailOn(): boolean {
+	return currentMailConfig().mode !== 'off';
+}
+
+function transport(): { config: Sending; transport: Transporter } {
 	if (cached) return cached;
 	const config = currentMailConfig();
+	if (config.mode === 'off') throw new MailOffError();
 	const t =
 		config.mode === 'smtp'
 			? nodemailer.createTransport(config.url)

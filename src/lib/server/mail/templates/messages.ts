@@ -80,3 +80,23 @@ export function passwordChangedMessage(m: { name: string; url: string }): Render
 		after: ['If you did not change it, choose a new password at once and tell your firm admin.']
 	});
 }
+
+export function signInAttackMessage(m: {
+	name: string;
+	failures: number;
+	url: string;
+}): RenderedMessage {
+	return render({
+		subject: 'Someone is trying to sign in to your Steamwisp account',
+		greeting: `Hello ${m.name},`,
+		paragraphs: [
+			`Someone has just typed a wrong password for your Steamwisp account ${m.failures} times in a row, from a browser you have not signed in with before. If that was you, there is nothing to do.`,
+			'If it was not you, your account is still safe: browsers you have signed in with before keep working as usual, while new ones now have to wait longer and longer between tries.',
+			'A long password nobody can guess is what keeps it that way. If yours is short, or used elsewhere too, choose a new one.'
+		],
+		action: { label: 'Choose a new password', url: m.url },
+		after: [
+			'We tell you once each time this starts, not for every try. If it goes on, tell your firm admin.'
+		]
+	});
+}
