@@ -86,7 +86,7 @@ describe('new passwords', () => {
 			confirm: 'a long password'
 		};
 		expect(acceptInvitationSchema.safeParse(twoLines).error!.issues[0].message).toBe(
-			'Write your name on one line.'
+			'Your name holds a hidden character (U+000A) that breaks the line or turns the text around; type it on one line, as it reads'
 		);
 		expect(
 			acceptInvitationSchema.safeParse({

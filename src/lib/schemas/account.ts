@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nameSchema } from './names';
 import type { Role } from './roles';
 
 /** An e-mail address as we store it: trimmed, lower case, at most 254 characters (RFC 5321). */
@@ -45,12 +46,7 @@ export const setPasswordSchema = z
 
 export const acceptInvitationSchema = z
 	.object({
-		name: z
-			.string({ error: 'Enter your name.' })
-			.trim()
-			.min(1, 'Enter your name.')
-			.max(160, 'Use at most 160 characters for your name.')
-			.refine((n) => !hasControl(n), 'Write your name on one line.'),
+		name: nameSchema(160, 'Enter your name.', 'Your name'),
 		password: newPasswordSchema,
 		confirm: z.string().max(PASSWORD_MAX)
 	})

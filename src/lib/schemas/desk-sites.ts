@@ -7,6 +7,7 @@
  */
 import { z } from 'zod';
 import { fromBase, toBase, type UnitSystemId } from '../units/index';
+import { nameSchema } from './names';
 import { unitSystems } from './roles';
 
 /** ISO 4217 codes the runtime knows (ICU's list, the same in Node and every current browser). */
@@ -102,7 +103,7 @@ const lower = (label: string) => label.charAt(0).toLowerCase() + label.slice(1);
 export const unitSystemSchema = z.enum(unitSystems, { error: 'Choose SI or US customary units' });
 
 export const clientFormSchema = z.object({
-	name: requiredText(160, 'Give the client company a name', 'The name'),
+	name: nameSchema(160, 'Give the client company a name', 'The name'),
 	contactEmail: z
 		.string()
 		.trim()
