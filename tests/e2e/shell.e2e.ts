@@ -1,4 +1,5 @@
 import { expect, test } from '@playwright/test';
+import { signedIn } from './support/sessions';
 
 test.describe('app shell', () => {
 	test('landing page says what the product does, in Atkinson Hyperlegible served by us', async ({
@@ -60,13 +61,19 @@ test.describe('app shell', () => {
 		await expect(page.locator('html')).toHaveAttribute('data-theme', 'plant-room');
 	});
 
-	test('/api/health reports the database up', async ({ request }) => {
+	test('/api/health says up to anyone, and the details only to an admin', async ({ request }) => {
 		const res = await request.get('/api/health');
 		expect(res.status()).toBe(200);
-		const body = await res.json();
+		expect(await res.json()).toEqual({ status: 'ok' });
+		const admin = await signedIn('admin@cinderbrook.example');
+		const body = await (await admin.get('/api/health')).json();
 		expect(body).toMatchObject({ status: 'ok', database: { up: true } });
 		expect(body.database.migrations).toBeGreaterThan(0);
 		expect(body.version).toMatch(/^\d+\.\d+\.\d+/);
+		const consultant = await signedIn('consultant@cinderbrook.example');
+		expect(await (await consultant.get('/api/health')).json()).toEqual({ status: 'ok' });
+		await admin.dispose();
+		await consultant.dispose();
 	});
 
 	test('the web app manifest and its icons are served', async ({ request }) => {

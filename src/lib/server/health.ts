@@ -1,4 +1,5 @@
 import { sql } from 'drizzle-orm';
+import type { Role } from '$lib/schemas/roles';
 import { db as appDb, type Database } from './db';
 
 export interface DatabaseHealth {
@@ -33,4 +34,22 @@ export async function checkDatabase(
 function describe(e: unknown): string {
 	const code = (e as { code?: string }).code;
 	return code ? `database unavailable (${code})` : 'database unavailable';
+}
+
+export type HealthAnswer =
+	| { status: 'ok' | 'degraded' }
+	| { status: 'ok' | 'degraded'; version: string; database: DatabaseHealth };
+
+/**
+ * What /api/health tells whom: anyone (a load balancer, a monitor) learns up or down, and
+ * nothing an attacker could match against a list of known flaws; a signed-in admin also gets
+ * the version and the database's round trip and migration count.
+ */
+export function healthAnswer(
+	database: DatabaseHealth,
+	version: string,
+	viewer: { role: Role } | null
+): HealthAnswer {
+	const status = database.up ? 'ok' : 'degraded';
+	return viewer?.role === 'admin' ? { status, version, database } : { status };
 }
