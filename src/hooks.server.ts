@@ -1,7 +1,7 @@
 import type { Handle, HandleServerError } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { dev } from '$app/environment';
-import { lucia } from '$lib/server/auth/lucia';
+import { readSession } from '$lib/server/auth/sessions';
 import { pool } from '$lib/server/db';
 import { MAX_FORM_BYTES, readForm } from '$lib/server/forms';
 import { guardRoute } from '$lib/server/policy';
@@ -32,32 +32,22 @@ const formLimit: Handle = async ({ event, resolve }) => {
 	return resolve(event);
 };
 
-/** Fills locals.user and locals.session from the session cookie; refreshes or clears it. */
+/** Fills locals.user and locals.session from the session cookie (./lib/server/auth/sessions.ts). */
 const session: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
 	event.locals.session = null;
-	const sessionId = event.cookies.get(lucia.sessionCookieName);
-	if (sessionId) {
-		const { session, user } = await lucia.validateSession(sessionId);
-		if (session && user && !user.disabledAt) {
-			if (session.fresh) {
-				const cookie = lucia.createSessionCookie(session.id);
-				event.cookies.set(cookie.name, cookie.value, { path: '.', ...cookie.attributes });
-			}
-			event.locals.session = { id: session.id, expiresAt: session.expiresAt, fresh: session.fresh };
-			event.locals.user = {
-				id: user.id,
-				firmId: user.firmId,
-				email: user.email,
-				name: user.name,
-				role: user.role,
-				clientCompanyId: user.clientCompanyId
-			};
-		} else {
-			if (session) await lucia.invalidateSession(session.id);
-			const blank = lucia.createBlankSessionCookie();
-			event.cookies.set(blank.name, blank.value, { path: '.', ...blank.attributes });
-		}
+	const found = await readSession(event.cookies);
+	if (found) {
+		const { session, user } = found;
+		event.locals.session = { id: session.id, expiresAt: session.expiresAt, fresh: session.fresh };
+		event.locals.user = {
+			id: user.id,
+			firmId: user.firmId,
+			email: user.email,
+			name: user.name,
+			role: user.role,
+			clientCompanyId: user.clientCompanyId
+		};
 	}
 	return resolve(event);
 };

@@ -1,6 +1,7 @@
 /**
  * Sign-in limits hold across app processes: two more `node build` processes on other loopback
- * ports share the test database with the main one; attempts made on either count for both.
+ * ports share the test database with the main one; failures made on either count for both, and
+ * a device cookie one of them issued is honoured by the other (they share the signing key).
  * Both extra processes trust X-Forwarded-For (ADDRESS_HEADER), as they would behind a load
  * balancer, so each test can speak from its own documentation-range address and leave
  * 127.0.0.1's budget alone.
@@ -9,6 +10,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes, randomUUID } from 'node:crypto';
 import { createServer } from 'node:net';
 import { expect, request, test, type APIRequestContext } from '@playwright/test';
+import { addressKey } from '../../src/lib/server/auth/limits';
 import { demoFirms } from '../../src/lib/server/seed/demo';
 import { openTestDb, rows, type Db } from './support/db';
 import { appEnv } from './support/servers';
@@ -76,29 +78,50 @@ function stop(child: ChildProcess): Promise<void> {
 }
 
 // Addresses from the IPv6 documentation prefix (RFC 3849), new for every run, so counters left
-// in the database by an earlier run never meet this one.
+// in the database by an earlier run never meet this one; each in a /64 of its own, since
+// addresses are counted by their /64.
 const run = randomBytes(2).toString('hex');
 let counter = 0;
-const freshAddress = () => `2001:db8:${run}::${(++counter).toString(16)}`;
+const freshAddress = () => `2001:db8:${run}:${(++counter).toString(16)}::1`;
 
-async function attempt(server: number, email: string, password: string, from: string) {
+/**
+ * One sign-in from a new client (no cookie from an earlier success rides along), or from a
+ * browser that signed in before when its device cookie is given. Returns the device cookie a
+ * success sets.
+ */
+async function attempt(
+	server: number,
+	email: string,
+	password: string,
+	from: string,
+	device?: string
+) {
 	const origin = `http://127.0.0.1:${ports[server]}`;
-	// A new client each time: no cookie from an earlier success rides along.
 	const client = await request.newContext({ baseURL: origin });
 	const res = await client.post('/signin', {
 		form: { email, password },
-		headers: { ...formHeaders(origin), 'x-forwarded-for': from },
+		headers: {
+			...formHeaders(origin),
+			'x-forwarded-for': from,
+			...(device ? { cookie: `steamwisp_device=${device}` } : {})
+		},
 		maxRedirects: 0
 	});
 	const text = await res.text();
+	const set = res
+		.headersArray()
+		.filter((h) => h.name.toLowerCase() === 'set-cookie')
+		.map((h) => /^steamwisp_device=([^;]*)/.exec(h.value)?.[1])
+		.find((v) => v);
 	await client.dispose();
 	return {
 		status: res.status(),
+		device: set ?? null,
 		tooMany: /Too many attempts, try again in (\d+) minutes?\./.exec(text)?.[0] ?? null
 	};
 }
 
-test('an account is locked after five failures, whichever process saw them', async () => {
+test('an account makes new browsers wait after five failures, whichever process saw them', async () => {
 	const email = `limit.${randomUUID()}@example.test`;
 	const password = 'the right long password';
 	await insertUser(db, { firmId: demoFirms[0].id, email, password });
@@ -112,10 +135,32 @@ test('an account is locked after five failures, whichever process saw them', asy
 		expect(r.status).toBe(429);
 		expect(r.tooMany).toBe('Too many attempts, try again in 1 minute.');
 	}
-	// While locked even the right password is refused, with the same words.
+	// While it waits even the right password is refused from a new browser, with the same words.
 	const right = await attempt(1, email, password, freshAddress());
 	expect(right.status).toBe(429);
 	expect(right.tooMany).toBe('Too many attempts, try again in 1 minute.');
+});
+
+test("a browser that signed in before is not kept out by others' failures, on either process", async () => {
+	const email = `known.${randomUUID()}@example.test`;
+	const password = 'the right long password';
+	await insertUser(db, { firmId: demoFirms[0].id, email, password });
+	const first = await attempt(0, email, password, freshAddress());
+	expect(first.status).toBe(303);
+	expect(first.device).toMatch(/^[A-Za-z0-9_-]{22}\.[A-Za-z0-9_-]{43}$/);
+	// Someone else fails from many addresses until new browsers must wait.
+	for (let i = 0; i < 7; i++) await attempt(i % 2, email, 'wrong guess', freshAddress());
+	expect((await attempt(0, email, password, freshAddress())).status).toBe(429);
+	// The owner's browser gets in on the other process too, even from an address that is waiting.
+	const from = freshAddress();
+	for (let i = 0; i < 30; i++)
+		await attempt(i % 2, `spray.${i}.${randomUUID()}@example.test`, 'x', from);
+	expect((await attempt(1, `spray.${randomUUID()}@example.test`, 'x', from)).status).toBe(429);
+	const known = await attempt(1, email, password, from, first.device!);
+	expect(known.status).toBe(303);
+	// A made-up device cookie vouches for nothing.
+	const forged = `${randomBytes(16).toString('base64url')}.${randomBytes(32).toString('base64url')}`;
+	expect((await attempt(0, email, password, freshAddress(), forged)).status).toBe(429);
 });
 
 test('an unknown address is limited exactly like a real one (no account enumeration)', async () => {
@@ -150,7 +195,11 @@ test('one network address is limited across accounts and processes', async () =>
 	}
 	const blocked = await attempt(0, `spray.last.${randomUUID()}@example.test`, 'guess', from);
 	expect(blocked.status).toBe(429);
-	// Another address is unaffected.
+	// Another address of the same /64 waits too; an address of another /64 is unaffected.
+	const neighbour = from.replace(/::1$/, ':dead:beef:1:2');
+	expect(
+		(await attempt(1, `spray.near.${randomUUID()}@example.test`, 'guess', neighbour)).status
+	).toBe(429);
 	expect(
 		(await attempt(1, `spray.other.${randomUUID()}@example.test`, 'guess', freshAddress())).status
 	).toBe(400);
@@ -182,10 +231,34 @@ test('a successful sign-in clears the account count and is not held against the 
 	const counters = await rows<{ scope: string; attempts: number }>(
 		db,
 		`SELECT scope, attempts FROM attempt_counters WHERE subject_hash IN (SHA2(?, 256), SHA2(?, 256))`,
-		[email, from]
+		[email, addressKey(from)]
 	);
 	expect(counters).toEqual([{ scope: 'sign-in:address', attempts: 4 }]);
 	// The account starts afresh: five more failures are allowed before the lock.
 	for (let i = 0; i < 5; i++) expect((await attempt(1, email, 'wrong', from)).status).toBe(400);
 	expect((await attempt(0, email, 'wrong', from)).status).toBe(429);
+});
+
+test('correct sign-ins never count, so they never keep an address waiting', async () => {
+	const from = freshAddress();
+	for (let i = 0; i < 30; i++)
+		await attempt(i % 2, `fail.${i}.${randomUUID()}@example.test`, 'x', from);
+	// Let the address's wait pass (move its last failure back rather than wait).
+	await db.query(
+		`UPDATE attempt_counters SET last_attempt_at = last_attempt_at - INTERVAL 61 SECOND
+		 WHERE scope = 'sign-in:address' AND subject_hash = SHA2(?, 256)`,
+		[addressKey(from)]
+	);
+	// Three people behind that address sign in from new browsers, one after another.
+	for (let i = 0; i < 3; i++) {
+		const email = `office.${i}.${randomUUID()}@example.test`;
+		await insertUser(db, { firmId: demoFirms[0].id, email, password: 'the right long password' });
+		expect((await attempt(i % 2, email, 'the right long password', from)).status).toBe(303);
+	}
+	const [row] = await rows<{ attempts: number }>(
+		db,
+		`SELECT attempts FROM attempt_counters WHERE scope = 'sign-in:address' AND subject_hash = SHA2(?, 256)`,
+		[addressKey(from)]
+	);
+	expect(row.attempts).toBe(30);
 });

@@ -8,7 +8,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import {
 	claimAttempt,
 	clearAttempts,
-	refundAttempt,
+	giveBack,
 	type AttemptKey
 } from '../../src/lib/server/auth/attempts';
 import { lookUpToken, newToken, spendToken } from '../../src/lib/server/auth/tokens';
@@ -46,10 +46,13 @@ describe('attempt counters', () => {
 	it('allow the allowance, then make the subject wait, then double the wait', async () => {
 		const key = account();
 		for (let i = 0; i < 5; i++)
-			expect(await claimAttempt([key], later(i))).toEqual({ allowed: true });
+			expect(await claimAttempt([key], later(i))).toMatchObject({
+				allowed: true,
+				counts: { 'sign-in:account': i + 1 }
+			});
 		expect(await claimAttempt([key], later(4))).toEqual({ allowed: false, waitMs: 60_000 });
 		expect(await attemptsOf(key)).toBe(5);
-		expect(await claimAttempt([key], later(4 + 60_000))).toEqual({ allowed: true });
+		expect(await claimAttempt([key], later(4 + 60_000))).toMatchObject({ allowed: true });
 		expect(await claimAttempt([key], later(4 + 60_000))).toEqual({
 			allowed: false,
 			waitMs: 120_000
@@ -71,15 +74,35 @@ describe('attempt counters', () => {
 		expect(await attemptsOf(key)).toBe(5);
 	});
 
-	it('refund one attempt, or clear the count', async () => {
+	it('give a claim back exactly as the counter was, or clear the count', async () => {
 		const acc = account();
 		const addr = address();
-		for (let i = 0; i < 3; i++) await claimAttempt([acc, addr], t0);
-		await refundAttempt(addr);
+		for (let i = 0; i < 3; i++) await claimAttempt([acc, addr], later(i));
+		const [before] = await db
+			.select({ at: attemptCounters.lastAttemptAt })
+			.from(attemptCounters)
+			.where(eq(attemptCounters.subjectHash, sql`SHA2(${addr.subject}, 256)`));
+		const claim = await claimAttempt([acc, addr], later(60_000));
+		if (!claim.allowed) throw new Error('the fourth attempt must be allowed');
+		await giveBack(claim, ['sign-in:address']);
 		await clearAttempts(acc);
-		expect(await attemptsOf(addr)).toBe(2);
+		expect(await attemptsOf(addr)).toBe(3);
+		const [after] = await db
+			.select({ at: attemptCounters.lastAttemptAt })
+			.from(attemptCounters)
+			.where(eq(attemptCounters.subjectHash, sql`SHA2(${addr.subject}, 256)`));
+		// The time of the last failure is back too: a success never prolongs a wait.
+		expect(after.at).toEqual(before.at);
 		expect(await attemptsOf(acc)).toBeNull();
-		await refundAttempt(address()); // nothing to refund: no error, no row
+	});
+
+	it('give one back when later attempts were counted meanwhile', async () => {
+		const addr = address();
+		const mine = await claimAttempt([addr], later(0));
+		await claimAttempt([addr], later(1));
+		if (!mine.allowed) throw new Error('the first attempt must be allowed');
+		await giveBack(mine);
+		expect(await attemptsOf(addr)).toBe(1);
 	});
 
 	it('store subjects only as hashes', async () => {

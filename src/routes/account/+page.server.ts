@@ -1,10 +1,9 @@
 import { redirect } from '@sveltejs/kit';
 import { changePasswordSchema, homeFor } from '$lib/schemas/account';
-import { auditAuth } from '$lib/server/auth/audit';
 import { tooManyMessage } from '$lib/server/auth/limits';
 import { mailLinkOrigin } from '$lib/server/auth/origin';
 import { changePassword } from '$lib/server/auth/password-change';
-import { clearSessionCookie, endAllSessions, startSession } from '$lib/server/auth/sessions';
+import { clearSessionCookie, signOutEverywhere, startSession } from '$lib/server/auth/sessions';
 import { formProblem, parseForm } from '$lib/server/forms';
 import { requireRole } from '$lib/server/policy';
 import type { Actions, PageServerLoad } from './$types';
@@ -21,14 +20,7 @@ export const actions: Actions = {
 	/** Ends every session of this person, this browser's included. */
 	signOutEverywhere: async (event) => {
 		const user = requireRole(event, 'account.own');
-		await endAllSessions(user.id);
-		await auditAuth({
-			action: 'sign-out-everywhere',
-			firmId: user.firmId,
-			actorId: user.id,
-			subjectId: user.id,
-			address: event.getClientAddress()
-		});
+		await signOutEverywhere(user, event.getClientAddress());
 		clearSessionCookie(event.cookies);
 		redirect(303, '/signin?done=signed-out-everywhere');
 	},

@@ -1,18 +1,14 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { homeFor, safeNext, signInSchema } from '$lib/schemas/account';
 import { roleSchema } from '$lib/schemas/roles';
-import {
-	claimAttempt,
-	clearAttempts,
-	pruneAttempts,
-	refundAttempt
-} from '$lib/server/auth/attempts';
-import { addressDigest, auditAuth } from '$lib/server/auth/audit';
+import { pruneAttempts } from '$lib/server/auth/attempts';
+import { auditAuth } from '$lib/server/auth/audit';
+import { DEVICE_COOKIE, setDeviceCookie } from '$lib/server/auth/device';
 import { tooManyMessage } from '$lib/server/auth/limits';
 import { lucia } from '$lib/server/auth/lucia';
-import { verifyPassword } from '$lib/server/auth/password';
+import { mailLinkOrigin } from '$lib/server/auth/origin';
 import { startSession } from '$lib/server/auth/sessions';
-import { accountForSignIn, noteSignIn } from '$lib/server/auth/sign-in';
+import { noteSignIn, signIn } from '$lib/server/auth/sign-in';
 import { readForm } from '$lib/server/forms';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -31,14 +27,10 @@ export const load: PageServerLoad = ({ locals, url }) => {
 	};
 };
 
-// Verifying against a real hash when the account does not exist keeps the answer's timing alike.
-const decoyHash =
-	'$argon2id$v=19$m=19456,t=2,p=1$SfeMs8BjhbrBZdm5ze/uBQ$YM8C/Ol3WvA3f0oP1z+GM1r80PaDEgZEMmImT9X1yeE';
-
 const mismatch = 'That e-mail address and password do not match an active account.';
 
 export const actions: Actions = {
-	default: async ({ request, cookies, locals, getClientAddress }) => {
+	default: async ({ request, cookies, locals, url, getClientAddress }) => {
 		const form = await readForm(request);
 		const parsed = signInSchema.safeParse(form);
 		if (!parsed.success) {
@@ -46,37 +38,30 @@ export const actions: Actions = {
 		}
 		const { email, password, next } = parsed.data;
 		const address = getClientAddress();
-		const keys = [
-			{ scope: 'sign-in:account', subject: email },
-			{ scope: 'sign-in:address', subject: address }
-		] as const;
-
-		const user = await accountForSignIn(email);
-		const subject = {
-			firmId: user?.firmId ?? null,
-			subjectId: user?.id ?? null,
-			after: user ? undefined : { email: addressDigest(email) },
-			actorId: null,
-			address
-		};
-		// Counted before the password is checked, so parallel guesses cannot outrun the limit.
-		const claim = await claimAttempt([...keys]);
-		if (!claim.allowed) {
-			await auditAuth({ action: 'sign-in-throttled', ...subject });
-			return fail(429, { email, error: tooManyMessage(claim.waitMs) });
+		const outcome = await signIn({
+			email,
+			password,
+			address,
+			device: cookies.get(DEVICE_COOKIE),
+			origin: mailLinkOrigin(url)
+		});
+		if (outcome.kind === 'throttled') {
+			return fail(429, { email, error: tooManyMessage(outcome.waitMs) });
 		}
-		const ok = await verifyPassword(user?.passwordHash ?? decoyHash, password);
-		if (!user || !ok || user.disabledAt) {
-			await auditAuth({ action: 'sign-in-failed', ...subject });
-			return fail(400, { email, error: mismatch });
-		}
-		await clearAttempts(keys[0]);
-		await refundAttempt(keys[1]);
-		// A fresh session id on every sign-in; any session this browser had ends (no fixation).
+		if (outcome.kind === 'mismatch') return fail(400, { email, error: mismatch });
+		const { user } = outcome;
+		setDeviceCookie(cookies, outcome.device);
+		// A fresh session on every sign-in; any session this browser had ends (no fixation).
 		if (locals.session) await lucia.invalidateSession(locals.session.id);
 		await startSession(cookies, user.id, request.headers.get('user-agent'));
 		await noteSignIn(user.id);
-		await auditAuth({ ...subject, action: 'sign-in', actorId: user.id });
+		await auditAuth({
+			action: 'sign-in',
+			firmId: user.firmId,
+			actorId: user.id,
+			subjectId: user.id,
+			address
+		});
 		// Housekeeping that needs no scheduler: old counters and expired sessions go now and then.
 		await pruneAttempts();
 		await lucia.deleteExpiredSessions();

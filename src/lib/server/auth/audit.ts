@@ -7,6 +7,7 @@ export type AuthAction =
 	| 'sign-in'
 	| 'sign-in-failed'
 	| 'sign-in-throttled'
+	| 'sign-in-alert'
 	| 'sign-out'
 	| 'sign-out-everywhere'
 	| 'password-change'

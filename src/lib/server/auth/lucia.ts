@@ -11,15 +11,19 @@ const adapter = new DrizzleMySQLAdapter(db, sessions, users);
 /**
  * Sessions: 12-hour lifetime, extended on use (lucia refreshes a session in its second half);
  * cookie HttpOnly, SameSite=Lax, and Secure unless the app is served over plain HTTP
- * (ORIGIN=http://…, as on a developer's loopback).
+ * (ORIGIN=http://…, as on a developer's loopback). The cookie carries a random token; the
+ * sessions table keeps only its SHA-256 as the session id (./sessions.ts), so a copy of the
+ * table signs nobody in.
  */
 const plainHttp = dev || /^http:\/\//.test(env.ORIGIN ?? '');
+/** Whether the app's cookies (the session's, the device cookie) carry `Secure`. */
+export const secureCookies = !plainHttp;
 
 export const lucia = new Lucia(adapter, {
 	sessionExpiresIn: new TimeSpan(12, 'h'),
 	sessionCookie: {
 		name: 'steamwisp_session',
-		attributes: { secure: !plainHttp, sameSite: 'lax' }
+		attributes: { secure: secureCookies, sameSite: 'lax' }
 	},
 	getUserAttributes: (row) => ({
 		firmId: row.firmId,

@@ -7,14 +7,15 @@ import { claimAttempt, clearAttempts } from './attempts';
 import { auditAuth } from './audit';
 import { hashPassword, verifyPassword } from './password';
 import { endAllSessions } from './sessions';
+import { revokeResetLinks } from './tokens';
 
 export type ChangeOutcome =
 	{ kind: 'changed' } | { kind: 'wrong-current' } | { kind: 'throttled'; waitMs: number };
 
 /**
  * Changes a signed-in person's password after checking the current one (limited like sign-in,
- * so a borrowed session cannot be used to guess it), then ends every session of the account;
- * the caller starts a fresh one for this browser.
+ * so a borrowed session cannot be used to guess it), withdraws open reset links, then ends
+ * every session of the account; the caller starts a fresh one for this browser.
  */
 export async function changePassword(
 	user: SessionUser,
@@ -22,7 +23,9 @@ export async function changePassword(
 	next: string,
 	ctx: { origin: string; address: string }
 ): Promise<ChangeOutcome> {
-	const key = { scope: 'sign-in:account', subject: user.email } as const;
+	// Counted per person apart from sign-in: someone guessing at the sign-in form must not be
+	// able to stop the owner from changing the password.
+	const key = { scope: 'change:account', subject: user.id } as const;
 	const claim = await claimAttempt([key]);
 	if (!claim.allowed) return { kind: 'throttled', waitMs: claim.waitMs };
 	const [row] = await db
@@ -36,6 +39,8 @@ export async function changePassword(
 	const passwordHash = await hashPassword(next);
 	await db.transaction(async (tx) => {
 		await tx.update(users).set({ passwordHash }).where(eq(users.id, user.id));
+		// A reset link sent before the change would undo it.
+		await revokeResetLinks(tx, user.id);
 		await auditAuth(
 			{
 				action: 'password-change',

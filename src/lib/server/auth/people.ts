@@ -4,7 +4,7 @@
  * these functions still filter by firm so no query can reach another tenant.
  */
 import { error } from '@sveltejs/kit';
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import type { Role } from '$lib/schemas/roles';
 import { db } from '../db';
 import { clientCompanies, tokens, users } from '../db/schema';
@@ -83,7 +83,10 @@ export async function changeRole(
 	await endAllSessions(person.id);
 }
 
-/** Disables an account: it cannot sign in, every session ends, open reset links die. */
+/**
+ * Disables an account: it cannot sign in, every session ends, open reset links die, and so do
+ * the invitations the person sent that nobody has accepted yet.
+ */
 export async function disablePerson(actor: SessionUser, person: Person, address: string | null) {
 	if (person.disabledAt) return;
 	await db.transaction(async (tx) => {
@@ -95,6 +98,17 @@ export async function disablePerson(actor: SessionUser, person: Person, address:
 			.update(tokens)
 			.set({ revoked: true })
 			.where(and(eq(tokens.userId, person.id), eq(tokens.purpose, 'password-reset')));
+		await tx
+			.update(tokens)
+			.set({ revoked: true })
+			.where(
+				and(
+					eq(tokens.createdBy, person.id),
+					eq(tokens.purpose, 'invite'),
+					eq(tokens.firmId, actor.firmId),
+					isNull(tokens.usedAt)
+				)
+			);
 		await auditAuth(
 			{ action: 'disable', firmId: actor.firmId, actorId: actor.id, subjectId: person.id, address },
 			tx

@@ -1,6 +1,6 @@
 /**
  * Password reset by e-mail. The request always gets the same answer, sent at once, whether or
- * not the address has an account (the message, if any, is sent afterwards), so nobody can use
+ * not the address has an account (everything else happens afterwards), so nobody can use
  * the form to find out who works with whom. Requests are limited per address and per network
  * address like sign-in, so the form cannot be used to flood someone's inbox.
  */
@@ -11,6 +11,7 @@ import { tokens, users } from '../db/schema';
 import { sendMailLater } from '../mail/send';
 import { passwordChangedMessage, passwordResetMessage } from '../mail/templates/messages';
 import { claimAttempt, clearAttempts } from './attempts';
+import { addressKey } from './limits';
 import { addressDigest, auditAuth } from './audit';
 import { hashPassword } from './password';
 import { endAllSessions } from './sessions';
@@ -18,6 +19,7 @@ import {
 	expiresIn,
 	lookUpToken,
 	newToken,
+	revokeResetLinks,
 	spendToken,
 	tokenLifetimeMs,
 	type TokenLookup
@@ -28,30 +30,59 @@ interface Context {
 	address: string;
 }
 
-export type ResetRequestOutcome = { kind: 'done' } | { kind: 'throttled'; waitMs: number };
+export type ResetRequestOutcome =
+	| { kind: 'done'; settled: Promise<void> }
+	| { kind: 'throttled'; waitMs: number; settled: Promise<void> };
 
+/**
+ * Answers at once, the same way for every address: the only work done before answering is the
+ * limit check, which is keyed by what was typed. Looking the account up, issuing the link, the
+ * audit row and the message all happen after the answer (`settled` says when; tests wait for
+ * it), so not even the time the answer takes depends on whether the address has an account.
+ */
 export async function requestReset(email: string, ctx: Context): Promise<ResetRequestOutcome> {
 	const claim = await claimAttempt([
 		{ scope: 'reset:account', subject: email },
-		{ scope: 'reset:address', subject: ctx.address }
+		{ scope: 'reset:address', subject: addressKey(ctx.address) }
 	]);
+	const settled = afterAnswer(() =>
+		claim.allowed ? issueReset(email, ctx) : noteThrottled(email, ctx)
+	);
+	return claim.allowed
+		? { kind: 'done', settled }
+		: { kind: 'throttled', waitMs: claim.waitMs, settled };
+}
+
+/** Runs `work` once the current request has had its answer; logs a failure, never throws. */
+function afterAnswer(work: () => Promise<void>): Promise<void> {
+	return new Promise<void>((resolve) => setImmediate(resolve)).then(work).catch((e: unknown) => {
+		console.error(`steamwisp: password reset request: ${(e as Error).message}`);
+	});
+}
+
+async function activeAccount(email: string) {
 	const [user] = await db
 		.select({ id: users.id, firmId: users.firmId, name: users.name, disabledAt: users.disabledAt })
 		.from(users)
 		.where(eq(users.email, email))
 		.limit(1);
-	const known = user && !user.disabledAt ? user : null;
-	if (!claim.allowed) {
-		await auditAuth({
-			action: 'reset-throttled',
-			firmId: known?.firmId ?? null,
-			actorId: null,
-			subjectId: known?.id ?? null,
-			after: known ? undefined : { email: addressDigest(email) },
-			address: ctx.address
-		});
-		return { kind: 'throttled', waitMs: claim.waitMs };
-	}
+	return { user, known: user && !user.disabledAt ? user : null };
+}
+
+async function noteThrottled(email: string, ctx: Context) {
+	const { known } = await activeAccount(email);
+	await auditAuth({
+		action: 'reset-throttled',
+		firmId: known?.firmId ?? null,
+		actorId: null,
+		subjectId: known?.id ?? null,
+		after: known ? undefined : { email: addressDigest(email) },
+		address: ctx.address
+	});
+}
+
+async function issueReset(email: string, ctx: Context) {
+	const { user, known } = await activeAccount(email);
 	if (!known) {
 		await auditAuth({
 			action: 'reset-request',
@@ -61,12 +92,12 @@ export async function requestReset(email: string, ctx: Context): Promise<ResetRe
 			after: { email: addressDigest(email), outcome: user ? 'disabled' : 'no-account' },
 			address: ctx.address
 		});
-		return { kind: 'done' };
+		return;
 	}
 	const { token, hash } = newToken();
 	await db.transaction(async (tx) => {
 		// Only the newest link works.
-		await revokeOpenResets(tx, known.id);
+		await revokeResetLinks(tx, known.id);
 		const id = randomUUID();
 		await tx.insert(tokens).values({
 			id,
@@ -98,18 +129,6 @@ export async function requestReset(email: string, ctx: Context): Promise<ResetRe
 			minutes: tokenLifetimeMs['password-reset'] / 60_000
 		})
 	});
-	return { kind: 'done' };
-}
-
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
-
-async function revokeOpenResets(tx: Tx, userId: string) {
-	await tx
-		.update(tokens)
-		.set({ revoked: true })
-		.where(
-			and(eq(tokens.userId, userId), eq(tokens.purpose, 'password-reset'), isNull(tokens.usedAt))
-		);
 }
 
 /** What the reset page shows before the new password is chosen. */
@@ -145,7 +164,7 @@ export async function resetPassword(
 				.set({ passwordHash })
 				.where(and(eq(users.id, userId), isNull(users.disabledAt)));
 			if (result.affectedRows !== 1) tx.rollback();
-			await revokeOpenResets(tx, userId);
+			await revokeResetLinks(tx, userId);
 			await auditAuth(
 				{
 					action: 'password-reset',

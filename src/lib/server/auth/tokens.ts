@@ -66,6 +66,25 @@ export async function spendToken(tx: Tx, id: string): Promise<boolean> {
 	return result.affectedRows === 1;
 }
 
+/**
+ * Withdraws every reset link of a person that is still open. Called whenever the password or
+ * the person's sessions change hands (reset, change, sign-out everywhere, disable): a link sent
+ * before then must not outlive it.
+ */
+export async function revokeResetLinks(executor: Pick<typeof db, 'update'>, userId: string) {
+	await executor
+		.update(tokens)
+		.set({ revoked: true })
+		.where(
+			and(
+				eq(tokens.userId, userId),
+				eq(tokens.purpose, 'password-reset'),
+				isNull(tokens.usedAt),
+				eq(tokens.revoked, false)
+			)
+		);
+}
+
 /** Expiry computed by the database clock, like every other time check on tokens. */
 export function expiresIn(purpose: TokenPurpose) {
 	return sql`NOW(3) + INTERVAL ${Math.round(tokenLifetimeMs[purpose] / 1000)} SECOND`;

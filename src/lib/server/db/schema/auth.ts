@@ -23,3 +23,15 @@ export const attemptCounters = mysqlTable(
 		index('attempt_counters_last_idx').on(t.lastAttemptAt)
 	]
 );
+
+/**
+ * Keys the app signs with (the device cookies of sign-in, ../../auth/device.ts), made once at
+ * random by the first process that needs one and shared by every process through the database.
+ * STEAMWISP_SECRET, when set, is used instead and nothing is kept here.
+ */
+export const serverKeys = mysqlTable('server_keys', {
+	name: varchar('name', { length: 32 }).primaryKey(),
+	/** 32 random bytes, hex. */
+	secret: char('secret', { length: 64 }).notNull(),
+	createdAt: createdAt()
+});

@@ -64,11 +64,14 @@ export const users = mysqlTable(
 	(t) => [uniqueIndex('users_email_uq').on(t.email), index('users_firm_idx').on(t.firmId)]
 );
 
-/** lucia v3 sessions (DrizzleMySQLAdapter expects id, user_id, expires_at). */
+/**
+ * lucia v3 sessions (DrizzleMySQLAdapter expects id, user_id, expires_at). The id is the SHA-256
+ * (hex) of the token in the person's cookie, never the token itself (auth/sessions.ts).
+ */
 export const sessions = mysqlTable(
 	'sessions',
 	{
-		id: varchar('id', { length: 255 }).primaryKey(),
+		id: char('id', { length: 64 }).primaryKey(),
 		userId: uuid('user_id')
 			.notNull()
 			.references(() => users.id, { onDelete: 'cascade' }),

@@ -4,7 +4,12 @@ import {
 	inviteSchema,
 	personSchema
 } from '$lib/schemas/people';
-import { invite, openInvitations, revokeInvitation } from '$lib/server/auth/invitations';
+import {
+	invite,
+	inviteLimitMessage,
+	openInvitations,
+	revokeInvitation
+} from '$lib/server/auth/invitations';
 import { mailLinkOrigin } from '$lib/server/auth/origin';
 import {
 	changeRole,
@@ -56,6 +61,14 @@ export const actions: Actions = {
 				const error = 'Choose one of your firm’s client companies.';
 				return formProblem(400, error, { values, errors: { clientCompanyId: error } });
 			}
+			case 'limited':
+				return formProblem(429, inviteLimitMessage(outcome.limit, outcome.waitMs), { values });
+			case 'mail-off':
+				return formProblem(
+					503,
+					'This server sends no e-mail (no mail server is set up), so it cannot send invitations. Ask whoever runs it to set STEAMWISP_SMTP_URL.',
+					{ values }
+				);
 			case 'not-sent':
 				return formProblem(
 					503,
