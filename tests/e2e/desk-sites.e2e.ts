@@ -170,6 +170,12 @@ test('an unknown currency on the site page is refused and the site is unchanged'
 		);
 	const before = await read();
 	await signInHere(page, consultant, demoPassword, `/desk/sites/${creamery.id}`);
+	// A site is a client's: its pages sit under Clients in the Desk's navigation.
+	await expect(
+		page
+			.getByRole('navigation', { name: 'Desk' })
+			.getByRole('link', { name: 'Clients', exact: true })
+	).toHaveAttribute('aria-current', 'page');
 	await page.getByLabel('Site name').fill(`${before.name} (renamed)`);
 	const currency = page.getByLabel('Currency');
 	await currency.fill('XYZ');

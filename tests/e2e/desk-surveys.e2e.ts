@@ -64,6 +64,16 @@ test('a consultant creates a survey, assigns the auditor, sends it out and sees 
 	await create(page);
 
 	await expect(page.getByRole('heading', { name })).toBeVisible();
+	// A survey's page sits under Surveys in the Desk's navigation.
+	const nav = page.getByRole('navigation', { name: 'Desk' });
+	await expect(nav.getByRole('link', { name: 'Surveys', exact: true })).toHaveAttribute(
+		'aria-current',
+		'page'
+	);
+	await expect(nav.getByRole('link', { name: 'Clients', exact: true })).not.toHaveAttribute(
+		'aria-current',
+		'page'
+	);
 	await expect(page.getByText('Not started', { exact: true })).toBeVisible();
 	// (Other tests' phones of this auditor may be listed already: sync state is the person's.)
 	const row = page.locator(`[data-auditor="${auditor.name}"]`);
