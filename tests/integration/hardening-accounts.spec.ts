@@ -198,17 +198,26 @@ describe('sign-in lockout', () => {
 });
 
 describe('invitations', () => {
+	// A firm of this run's own, so its limits meet no invitation of an earlier run or file.
+	let ownFirm: string;
+	let ownAdmin: SessionUser;
+	beforeAll(async () => {
+		ownFirm = randomUUID();
+		await db.insert(firms).values({ id: ownFirm, name: `Invitation test firm ${run}` });
+		ownAdmin = await person(ownFirm, 'admin');
+	});
+
 	it('answer and list the same for a new address and for another firm’s person', async () => {
 		const outsider = await person(firmB.id, 'consultant');
 		const newcomer = freshEmail('newcomer');
 		const asked = { role: 'auditor' as const, clientCompanyId: null };
 		const ctx = { origin, address: '127.0.0.1' };
-		const a = await invite(adminA, { email: newcomer, ...asked }, ctx);
-		const b = await invite(adminA, { email: outsider.email, ...asked }, ctx);
+		const a = await invite(ownAdmin, { email: newcomer, ...asked }, ctx);
+		const b = await invite(ownAdmin, { email: outsider.email, ...asked }, ctx);
 		expect(b).toEqual(a);
 		expect(a).toEqual({ kind: 'sent' });
 
-		const open = await openInvitations(firmA.id);
+		const open = await openInvitations(ownFirm);
 		const rowA = open.find((r) => r.email === newcomer);
 		const rowB = open.find((r) => r.email === outsider.email);
 		const shape = (r: typeof rowA) => ({ ...r, id: 'x', email: 'x', createdAt: 0, expiresAt: 0 });
@@ -226,7 +235,7 @@ describe('invitations', () => {
 		expect(told.message.text).not.toContain('/invitation/');
 		expect(told.meta.firmId).toBe(firmB.id);
 		await mail.waitFor(newcomer, /invited you/);
-		const shown = (await firmMailbox(firmA.id)).flatMap((m) => m.rcptTo);
+		const shown = (await firmMailbox(ownFirm)).flatMap((m) => m.rcptTo);
 		expect(shown).toContain(newcomer);
 		expect(shown).not.toContain(outsider.email);
 	});
@@ -234,7 +243,7 @@ describe('invitations', () => {
 	it('keep a message out of the mailbox once its address is another firm’s person', async () => {
 		const address = freshEmail('moved');
 		await invite(
-			adminA,
+			ownAdmin,
 			{ email: address, role: 'auditor', clientCompanyId: null },
 			{
 				origin,
@@ -242,15 +251,15 @@ describe('invitations', () => {
 			}
 		);
 		const sent = await mail.waitFor(address, /invited you/);
-		expect(await firmMessage(firmA.id, sent.meta.id)).not.toBeNull();
+		expect(await firmMessage(ownFirm, sent.meta.id)).not.toBeNull();
 		await person(firmB.id, 'auditor', address);
-		expect(await firmMessage(firmA.id, sent.meta.id)).toBeNull();
-		expect((await firmMailbox(firmA.id)).map((m) => m.id)).not.toContain(sent.meta.id);
+		expect(await firmMessage(ownFirm, sent.meta.id)).toBeNull();
+		expect((await firmMailbox(ownFirm)).map((m) => m.id)).not.toContain(sent.meta.id);
 	});
 
 	it('are limited per person and per address, with nothing sent past a limit', async () => {
 		const ctx = { origin, address: null };
-		const inviter = await person(firmA.id, 'consultant');
+		const inviter = await person(ownFirm, 'consultant');
 		const { max } = inviteLimits.person;
 		for (let i = 0; i < max; i++) {
 			const r = await invite(
@@ -278,7 +287,7 @@ describe('invitations', () => {
 
 		// One address, invited again and again.
 		const target = freshEmail('target');
-		const other = await person(firmA.id, 'admin');
+		const other = await person(ownFirm, 'admin');
 		for (let i = 0; i < inviteLimits.address.max; i++) {
 			expect(
 				(await invite(other, { email: target, role: 'auditor', clientCompanyId: null }, ctx)).kind
@@ -323,7 +332,7 @@ describe('invitations', () => {
 	});
 
 	it('die with their sender: revoked when the sender is disabled', async () => {
-		const consultant = await person(firmA.id, 'consultant');
+		const consultant = await person(ownFirm, 'consultant');
 		const invitee = freshEmail('orphan');
 		await invite(
 			consultant,
@@ -334,8 +343,8 @@ describe('invitations', () => {
 		const token = link.split('/invitation/')[1];
 		expect((await describeInvitation(token)).state).toBe('valid');
 
-		await disablePerson(adminA, { ...consultant, disabledAt: null }, null);
-		expect((await openInvitations(firmA.id)).map((r) => r.email)).not.toContain(invitee);
+		await disablePerson(ownAdmin, { ...consultant, disabledAt: null }, null);
+		expect((await openInvitations(ownFirm)).map((r) => r.email)).not.toContain(invitee);
 		expect(await acceptInvitation(token, { name: 'Orphan', password }, null)).toEqual({
 			kind: 'dead',
 			state: 'revoked'
@@ -345,8 +354,8 @@ describe('invitations', () => {
 
 	it('are refused once the sender is no longer active, however that came about', async () => {
 		const ctx = { origin, address: null };
-		const disabled = await person(firmA.id, 'consultant');
-		const demoted = await person(firmA.id, 'consultant');
+		const disabled = await person(ownFirm, 'consultant');
+		const demoted = await person(ownFirm, 'consultant');
 		const [x, y] = [freshEmail('x'), freshEmail('y')];
 		await invite(disabled, { email: x, role: 'auditor', clientCompanyId: null }, ctx);
 		await invite(demoted, { email: y, role: 'auditor', clientCompanyId: null }, ctx);
@@ -361,7 +370,7 @@ describe('invitations', () => {
 			.set({ disabledAt: sql`NOW(3)` })
 			.where(eq(users.id, disabled.id));
 		await changeRole(
-			adminA,
+			ownAdmin,
 			{ ...demoted, disabledAt: null },
 			{ role: 'auditor', clientCompanyId: null },
 			null
