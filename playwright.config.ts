@@ -3,7 +3,7 @@ import { chromiumLaunchOptions } from './tests/e2e/support/chromium';
 import { appEnv, appOrigin as origin, appPort as port, e2eMail } from './tests/e2e/support/servers';
 
 /**
- * End-to-end tests against the built app (`node build`) in Debian's Chromium — never a
+ * End-to-end tests against the built app (`node server`) in Debian's Chromium — never a
  * downloaded browser. `npm test` builds the app and points it at the fresh test database.
  */
 
@@ -31,7 +31,8 @@ export default defineConfig({
 			env: e2eMail
 		},
 		{
-			command: 'node build',
+			// The production server: adapter-node's handler with the security headers on every answer.
+			command: 'node server',
 			url: `${origin}/api/health`,
 			reuseExistingServer: false,
 			timeout: 60_000,

@@ -1,8 +1,10 @@
 import adapter from '@sveltejs/adapter-node';
 import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
 import { readFileSync } from 'node:fs';
+import { cspDirectives, inlineScriptHashes } from './server/headers.js';
 
 const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 'utf8'));
+const template = readFileSync(new URL('./src/app.html', import.meta.url), 'utf8');
 
 /** @type {import('@sveltejs/kit').Config} */
 const config = {
@@ -18,10 +20,26 @@ const config = {
 		// Type-check (and type-aware lint) the scripts and tool configs with the app.
 		typescript: {
 			config: (tsconfig) => {
-				tsconfig.include.push('../scripts/**/*.ts', '../pwa/**/*.ts', '../*.config.ts');
+				tsconfig.include.push(
+					'../scripts/**/*.ts',
+					'../pwa/**/*.ts',
+					'../server/**/*.js',
+					'../server/**/*.ts',
+					'../*.config.ts'
+				);
 			}
 		},
-		csrf: { trustedOrigins: [] }
+		csrf: { trustedOrigins: [] },
+		// Content-Security-Policy (server/headers.js): a nonce for the start-up script of pages
+		// rendered per request, hashes in prerendered pages (the Walk shell, the offline page),
+		// plus the hash of the template's own theme script.
+		csp: {
+			mode: 'auto',
+			directives: {
+				...cspDirectives,
+				'script-src': [...(cspDirectives['script-src'] ?? []), ...inlineScriptHashes(template)]
+			}
+		}
 	}
 };
 

@@ -18,7 +18,7 @@ export default defineConfig({
 				test: {
 					name: 'unit',
 					environment: 'node',
-					include: ['src/**/*.spec.ts', 'tests/reference/**/*.spec.ts']
+					include: ['src/**/*.spec.ts', 'server/**/*.spec.ts', 'tests/reference/**/*.spec.ts']
 				}
 			},
 			{

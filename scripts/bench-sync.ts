@@ -37,7 +37,7 @@ const PHOTO = new Uint8Array(
 const FINDINGS = 1000;
 const PULL = 10_000;
 
-const app = spawn('node', ['build'], {
+const app = spawn('node', ['server'], {
 	env: {
 		...process.env,
 		HOST: '127.0.0.1',

@@ -24,7 +24,7 @@ const AUDITOR = 'auditor@cinderbrook.example';
 const PHOTO = new URL('../tests/fixtures/trap-photo.jpg', import.meta.url);
 const ROUNDS = 5;
 
-const app = spawn('node', ['build'], {
+const app = spawn('node', ['server'], {
 	env: { ...process.env, HOST: '127.0.0.1', PORT: String(PORT), ORIGIN },
 	stdio: ['ignore', 'ignore', 'inherit']
 });

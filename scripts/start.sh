@@ -18,7 +18,7 @@ npx tsx scripts/seed.ts
 
 # Rebuild only when something the build reads changed since the last build.
 stamp="build/.steamwisp-built"
-if [ ! -f "$stamp" ] || [ -n "$(find src static pwa drizzle package-lock.json svelte.config.js vite.config.ts \
+if [ ! -f "$stamp" ] || [ -n "$(find src static pwa server drizzle package-lock.json svelte.config.js vite.config.ts \
 	tailwind.config.ts -newer "$stamp" -print -quit)" ]; then
 	say "building the app…"
 	node_modules/.bin/vite build --logLevel warn
@@ -43,4 +43,4 @@ if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
 	say "development mailbox on (STEAMWISP_DEV_MAILBOX=1): e-mail stays on this machine (fake SMTP on 127.0.0.1:$MAIL_PORT) and admins read it, reset links included, in Desk → Mailbox; not for production"
 fi
 say "Steamwisp is at $ORIGIN  (Ctrl-C stops the app; 'npm run db:stop' stops the database)"
-node build
+node server

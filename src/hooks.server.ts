@@ -1,10 +1,12 @@
 import type { Handle, HandleServerError } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { dev } from '$app/environment';
+import { env } from '$env/dynamic/private';
 import { readSession } from '$lib/server/auth/sessions';
 import { pool } from '$lib/server/db';
 import { MAX_FORM_BYTES, readForm } from '$lib/server/forms';
 import { guardRoute } from '$lib/server/policy';
+import { baseCsp, securityHeaders } from '../server/headers.js';
 
 // adapter-node closes the HTTP server on SIGTERM/SIGINT, then emits this; the process can only
 // exit once the database pool's idle connections are closed too.
@@ -63,9 +65,11 @@ const guard: Handle = async ({ event, resolve }) => {
 };
 
 /**
- * Headers every answer carries: no framing (clickjacking on sign-in and admin forms), no MIME
- * sniffing, no full URLs in Referer; and nothing a signed-in person saw kept in shared caches
- * or shown again by the Back button after signing out.
+ * Headers every answer carries (server/headers.js, shared with the production server, which
+ * also covers the files served before any hook runs): Content-Security-Policy — SvelteKit writes
+ * pages' own, with their nonce; every other answer gets the base policy — no framing, no MIME
+ * sniffing, no full URLs in Referer, HSTS over https; and nothing a signed-in person saw kept
+ * in shared caches or shown again by the Back button after signing out.
  */
 const headers: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);
@@ -73,9 +77,9 @@ const headers: Handle = async ({ event, resolve }) => {
 		if (!response.headers.has(name)) response.headers.set(name, value);
 	};
 	try {
-		set('x-frame-options', 'DENY');
-		set('x-content-type-options', 'nosniff');
-		set('referrer-policy', 'strict-origin-when-cross-origin');
+		const answerHeaders = securityHeaders({ origin: env.ORIGIN, hsts: env.STEAMWISP_HSTS });
+		for (const [name, value] of Object.entries(answerHeaders)) set(name, value);
+		set('content-security-policy', baseCsp);
 		if (event.locals.user) set('cache-control', 'private, no-store');
 	} catch {
 		// Responses built from fetch() have immutable headers; they pass through unchanged.
