@@ -11,6 +11,8 @@ import { manifest } from './manifest.ts';
  * - Every other page goes to the network only (signed-in pages are `no-store` and never kept
  *   by the worker); without a network the precached offline page is shown instead.
  * - API calls are never cached by the worker: the device database and outbox own that data.
+ * - No runtime cache at all: on activation the worker deletes any cache but its precache
+ *   (static/sw-caches.js), and sign-out does the same on the page (docs/security.md).
  */
 export const pwaOptions: SvelteKitPWAOptions = {
 	registerType: 'autoUpdate',
@@ -30,8 +32,9 @@ export const pwaOptions: SvelteKitPWAOptions = {
 		navigateFallback: '/walk',
 		navigateFallbackAllowlist: [/^\/walk(\/|$)/],
 		cleanupOutdatedCaches: true,
-		// Background Sync: the worker wakes open Walk pages to send (static/sw-sync.js).
-		importScripts: ['/sw-sync.js'],
+		// Background Sync: the worker wakes open Walk pages to send (static/sw-sync.js); on
+		// activation it deletes every cache but its precache (static/sw-caches.js).
+		importScripts: ['/sw-sync.js', '/sw-caches.js'],
 		clientsClaim: true,
 		skipWaiting: true,
 		runtimeCaching: [
