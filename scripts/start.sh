@@ -33,7 +33,7 @@ export BODY_SIZE_LIMIT="${BODY_SIZE_LIMIT:-9M}"
 npx tsx scripts/seed.ts --print-sign-ins
 
 # E-mail goes to the local SMTP fake (scripts/mail-fake.ts) unless STEAMWISP_SMTP_URL names a real
-# server. The demo turns the development mailbox on (off by default: `node build` alone never
+# server. The demo turns the development mailbox on (off by default: `node server` alone never
 # shows it); it shows every reset link sent for a firm to that firm's admins.
 if [ -z "${STEAMWISP_SMTP_URL:-}" ]; then
 	export STEAMWISP_MAIL_PORT="$MAIL_PORT" STEAMWISP_DEV_MAILBOX=1

@@ -1,5 +1,5 @@
 /**
- * Sign-in limits hold across app processes: two more `node build` processes on other loopback
+ * Sign-in limits hold across app processes: two more `node server` processes on other loopback
  * ports share the test database with the main one; failures made on either count for both, and
  * a device cookie one of them issued is honoured by the other (they share the signing key).
  * Both extra processes trust X-Forwarded-For (ADDRESS_HEADER), as they would behind a load
@@ -27,7 +27,7 @@ test.beforeAll(async () => {
 	db = openTestDb();
 	for (let i = 0; i < 2; i++) ports.push(await freeLoopbackPort());
 	for (const port of ports) {
-		const child = spawn('node', ['build'], {
+		const child = spawn('node', ['server'], {
 			env: {
 				...process.env,
 				...appEnv(port, { ADDRESS_HEADER: 'x-forwarded-for', XFF_DEPTH: '1' })
@@ -39,7 +39,7 @@ test.beforeAll(async () => {
 		await expect
 			.poll(async () => (await api.get('/api/health').catch(() => null))?.status(), {
 				timeout: 30_000,
-				message: `node build on port ${port}`
+				message: `node server on port ${port}`
 			})
 			.toBe(200);
 		servers.push(api);

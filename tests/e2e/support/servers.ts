@@ -23,7 +23,7 @@ export const e2eMail = {
 	STEAMWISP_MAILBOX_DIR: resolve(import.meta.dirname, '../../../.data/mailbox-e2e')
 };
 
-/** The environment every `node build` of the tests runs with. */
+/** The environment every app process (`node server`) of the tests runs with. */
 export function appEnv(port: number, extra: Record<string, string> = {}): Record<string, string> {
 	return {
 		HOST: '127.0.0.1',
