@@ -81,12 +81,12 @@ export default ts.config(
 		rules: { '@typescript-eslint/no-floating-promises': 'error' }
 	},
 	{
-		files: ['src/lib/steam/**', 'src/lib/units/**'],
+		files: ['src/lib/steam/**', 'src/lib/units/**', 'src/lib/economics/**'],
 		rules: { 'no-restricted-imports': ['error', { patterns: frameworkImports }] }
 	},
 	{
 		// Barrels themselves, and the spec of the public barrel, are the only index importers.
-		files: ['src/lib/steam/**', 'src/lib/units/**'],
+		files: ['src/lib/steam/**', 'src/lib/units/**', 'src/lib/economics/**'],
 		ignores: ['**/index.ts', '**/index.spec.ts'],
 		rules: {
 			'no-restricted-imports': ['error', { patterns: [...frameworkImports, barrelImports] }]
