@@ -1,0 +1,48 @@
+/**
+ * The ranked savings list: the query string of `GET /api/surveys/[id]/savings` (docs/savings.md)
+ * and the orders it ranks by. Shared by the server and the pages that ask for it.
+ */
+import { z } from 'zod';
+
+/** savings: annual saving, biggest first; payback: shortest first; co2: most CO2 avoided first. */
+export const SAVINGS_RANKS = ['savings', 'payback', 'co2'] as const;
+export type SavingsRank = (typeof SAVINGS_RANKS)[number];
+
+export const SAVINGS_RANK_LABELS: Record<SavingsRank, string> = {
+	savings: 'Annual saving',
+	payback: 'Payback',
+	co2: 'CO2 avoided'
+};
+
+/** Most items one answer lists; the totals still count every saving finding. */
+export const MAX_SAVINGS_ITEMS = 5_000;
+
+export const savingsQuerySchema = z.strictObject(
+	{
+		rank: z
+			.enum(SAVINGS_RANKS, { error: `rank must be one of: ${SAVINGS_RANKS.join(', ')}` })
+			.default('savings')
+	},
+	{
+		error: (issue) =>
+			issue.code === 'unrecognized_keys'
+				? `Unknown parameter ${issue.keys.join(', ')}: the savings list takes only rank`
+				: undefined
+	}
+);
+export type SavingsQuery = z.output<typeof savingsQuerySchema>;
+
+/** The query string as the schema reads it; a parameter given twice is refused. */
+export function readSavingsQuery(
+	params: URLSearchParams
+): { ok: true; query: SavingsQuery } | { ok: false; message: string } {
+	const raw: Record<string, string> = {};
+	for (const name of new Set(params.keys())) {
+		const values = params.getAll(name);
+		if (values.length > 1) return { ok: false, message: `Give ${name} only once.` };
+		raw[name] = values[0];
+	}
+	const parsed = savingsQuerySchema.safeParse(raw);
+	if (parsed.success) return { ok: true, query: parsed.data };
+	return { ok: false, message: parsed.error.issues[0]?.message ?? 'Check the query.' };
+}

@@ -1,0 +1,175 @@
+/**
+ * The ranked savings list of one survey: its findings that save money on current figures,
+ * ranked in SQL over the typed columns, with each one's rank and the running sums of saving
+ * and repair cost in rank order (window functions: the Pareto chart's points), never loading
+ * the survey's findings into Node. At most MAX_SAVINGS_ITEMS rows come back; the running sums
+ * are over the whole ranking, so the last row listed still carries the true cumulative.
+ */
+import { and, asc, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
+import { MAX_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
+import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
+import { areas, assets, findings as F, headers } from '../db/schema';
+import type { Executor } from '../db/types';
+import { figuresCurrentSql } from '../pricing/state';
+import { conditionWords, kindWords, statusWords } from './words';
+
+export interface SavingsItem {
+	/** 1-based place in the ranking. */
+	rank: number;
+	id: string;
+	kind: FindingKind;
+	kindWords: string;
+	tag: string | null;
+	location: string;
+	area: string | null;
+	header: string | null;
+	condition: string | null;
+	conditionWords: string | null;
+	status: FindingStatus;
+	statusWords: string;
+	/** Steam no longer lost once repaired, kg/h. */
+	steamKgH: number | null;
+	/** Heat the boiler no longer replaces, kW. */
+	heatKw: number | null;
+	/** Fuel energy saved per year, GJ. */
+	fuelGjYear: number | null;
+	/** Fuel and water cost saved per year, minor units of `currency` (> 0 for every item). */
+	costMinor: number;
+	currency: string;
+	/** CO2 avoided per year, kg. */
+	co2KgYear: number | null;
+	/** Makeup water saved per year, m³. */
+	waterM3Year: number | null;
+	/** Repair cost, minor units; null: not priced yet. */
+	repairCostMinor: number | null;
+	/** Simple payback, years; null without a repair cost. */
+	paybackYears: number | null;
+	/** Saving per year of this item and every item ranked above it, minor units. */
+	cumulativeSavingMinor: number;
+	/** Known repair costs of this item and every item ranked above it, minor units. */
+	cumulativeRepairCostMinor: number;
+}
+
+/**
+ * What the list holds: the survey's live findings priced on the basis the survey is on now, by
+ * this engine, that save something. `basisId` is that basis (SurveyPricing.basisId).
+ */
+export const savingFindingSql = (surveyId: string, basisId: string | null): SQL =>
+	and(
+		eq(F.surveyId, surveyId),
+		isNull(F.deletedAt),
+		sql`${figuresCurrentSql(basisId)}`,
+		gt(F.cost, 0)
+	)!;
+
+/**
+ * The orders, each total (ties by id): saving biggest first; payback shortest first with
+ * findings that have none last; CO2 avoided most first (none last).
+ */
+export const RANK_ORDER: Record<SavingsRank, SQL[]> = {
+	savings: [desc(F.cost), asc(F.id)],
+	payback: [sql`${F.paybackYears} IS NULL`, asc(F.paybackYears), asc(F.id)],
+	co2: [sql`${F.co2} IS NULL`, desc(F.co2), asc(F.id)]
+};
+
+const orderBy = (rank: SavingsRank) => sql`ORDER BY ${sql.join(RANK_ORDER[rank], sql`, `)}`;
+/** Running sums row by row (the order is total, so no two rows share a place). */
+const runningOver = (rank: SavingsRank) =>
+	sql`OVER (${orderBy(rank)} ROWS BETWEEN UNBOUNDED PRECEDING AND CURRENT ROW)`;
+
+const n = (v: string | number | null) => (v === null ? null : Number(v));
+
+/**
+ * The first `limit` items of the survey's ranking (MAX_SAVINGS_ITEMS unless told), in rank
+ * order. One statement: the ranking with its window sums over every saving finding in a
+ * derived table, cut to the limit, then the names of the rows kept.
+ */
+export async function rankedItems(
+	db: Executor,
+	survey: { id: string; basisId: string | null; currency: string },
+	rank: SavingsRank,
+	limit = MAX_SAVINGS_ITEMS
+): Promise<SavingsItem[]> {
+	const over = runningOver(rank);
+	const ranked = db
+		.select({
+			id: F.id,
+			kind: F.kind,
+			assetId: F.assetId,
+			areaId: F.areaId,
+			headerId: F.headerId,
+			location: F.location,
+			condition: F.condition,
+			status: F.status,
+			steamKgH: F.steamLoss,
+			heatKw: F.heatLoss,
+			fuelGjYear: F.fuelEnergy,
+			costMinor: F.cost,
+			co2KgYear: F.co2,
+			waterM3Year: F.water,
+			repairCostMinor: F.repairCost,
+			paybackYears: F.paybackYears,
+			place: sql<string | number>`ROW_NUMBER() OVER (${orderBy(rank)})`.as('place'),
+			cumulativeSaving: sql<string | number>`SUM(${F.cost}) ${over}`.as('cumulative_saving'),
+			cumulativeRepair: sql<string | number>`SUM(COALESCE(${F.repairCost}, 0)) ${over}`.as(
+				'cumulative_repair'
+			)
+		})
+		.from(F)
+		.where(savingFindingSql(survey.id, survey.basisId))
+		.orderBy(...RANK_ORDER[rank])
+		.limit(limit)
+		.as('ranked');
+	const rows = await db
+		.select({
+			id: ranked.id,
+			kind: ranked.kind,
+			tag: assets.tag,
+			location: ranked.location,
+			area: areas.name,
+			header: headers.name,
+			condition: ranked.condition,
+			status: ranked.status,
+			steamKgH: ranked.steamKgH,
+			heatKw: ranked.heatKw,
+			fuelGjYear: ranked.fuelGjYear,
+			costMinor: ranked.costMinor,
+			co2KgYear: ranked.co2KgYear,
+			waterM3Year: ranked.waterM3Year,
+			repairCostMinor: ranked.repairCostMinor,
+			paybackYears: ranked.paybackYears,
+			place: ranked.place,
+			cumulativeSaving: ranked.cumulativeSaving,
+			cumulativeRepair: ranked.cumulativeRepair
+		})
+		.from(ranked)
+		.leftJoin(assets, eq(assets.id, ranked.assetId))
+		.leftJoin(areas, eq(areas.id, ranked.areaId))
+		.leftJoin(headers, eq(headers.id, ranked.headerId))
+		.orderBy(asc(ranked.place));
+	return rows.map((r) => ({
+		rank: Number(r.place),
+		id: r.id,
+		kind: r.kind as FindingKind,
+		kindWords: kindWords(r.kind),
+		tag: r.tag,
+		location: r.location ?? '',
+		area: r.area,
+		header: r.header,
+		condition: r.condition,
+		conditionWords: conditionWords(r.condition),
+		status: r.status as FindingStatus,
+		statusWords: statusWords(r.status),
+		steamKgH: r.steamKgH,
+		heatKw: r.heatKw,
+		fuelGjYear: r.fuelGjYear,
+		costMinor: Number(r.costMinor),
+		currency: survey.currency,
+		co2KgYear: r.co2KgYear,
+		waterM3Year: r.waterM3Year,
+		repairCostMinor: n(r.repairCostMinor),
+		paybackYears: r.paybackYears,
+		cumulativeSavingMinor: Number(r.cumulativeSaving),
+		cumulativeRepairCostMinor: Number(r.cumulativeRepair)
+	}));
+}

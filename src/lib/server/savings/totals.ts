@@ -1,0 +1,168 @@
+/**
+ * Totals and breakdown of a survey's ranked savings list, in one aggregate over its findings
+ * (grouped by kind and area, a handful of groups): sums of what every saving finding saves
+ * per year and costs to repair, how many findings the list leaves out and why, and the same
+ * sums per kind and per area for the breakdown beside the Pareto chart.
+ */
+import { and, eq, isNull, sql, type SQL } from 'drizzle-orm';
+import { FINDING_KINDS, type FindingKind } from '../../schemas/finding-vocabulary';
+import { simplePaybackYears } from '../../economics/payback';
+import { areas, findings as F } from '../db/schema';
+import type { Executor } from '../db/types';
+import { figuresOutOfDateSql } from '../pricing/state';
+import { ENGINE_VERSION } from '../../steam/version';
+import { savingFindingSql } from './ranked-list';
+import { kindWords } from './words';
+
+export interface SavingsTotals {
+	/** Saving findings (every one, also past the list's cut). */
+	count: number;
+	/** Per year, over the saving findings. */
+	steamKgH: number;
+	heatKw: number;
+	fuelGjYear: number;
+	/** Fuel and water cost saved per year, minor units of `currency`. */
+	costMinor: number;
+	co2KgYear: number;
+	waterM3Year: number;
+	/** Known repair costs of the saving findings, minor units. */
+	repairCostMinor: number;
+	/** Saving findings whose repair is not priced yet (left out of repairCostMinor). */
+	withoutRepairCost: number;
+	/** repairCostMinor ÷ costMinor, years; null with no saving or no repair priced. */
+	paybackYears: number | null;
+	currency: string;
+	/** Live findings left out because their figures are out of date (another basis or engine). */
+	outOfDate: number;
+	/** Live findings left out because they have no money figures (pricing_note says why). */
+	withoutFigures: number;
+}
+
+/** One group of the breakdown: a kind, or an area (key null: findings with no area). */
+export interface SavingsGroup {
+	key: string | null;
+	label: string;
+	count: number;
+	costMinor: number;
+	repairCostMinor: number;
+	co2KgYear: number;
+}
+
+export interface SavingsBreakdown {
+	/** By kind, biggest saving first. */
+	kind: SavingsGroup[];
+	/** By area, biggest saving first. */
+	area: SavingsGroup[];
+}
+
+const sumWhen = (when: SQL, value: SQL | typeof F.cost) =>
+	sql<string | number | null>`SUM(CASE WHEN ${when} THEN ${value} END)`;
+const countWhen = (when: SQL) =>
+	sql<string | number | null>`SUM(CASE WHEN ${when} THEN 1 ELSE 0 END)`;
+const num = (v: string | number | null | undefined) => Number(v ?? 0);
+
+/** Biggest saving first; ties by label, then the key (null last). */
+const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
+	b.costMinor - a.costMinor ||
+	a.label.localeCompare(b.label) ||
+	(a.key ?? '\uffff').localeCompare(b.key ?? '\uffff');
+
+export async function savingsTotals(
+	db: Executor,
+	survey: { id: string; basisId: string | null; currency: string }
+): Promise<{ totals: SavingsTotals; breakdown: SavingsBreakdown }> {
+	const saving = savingFindingSql(survey.id, survey.basisId);
+	const groups = await db
+		.select({
+			kind: F.kind,
+			areaId: F.areaId,
+			area: areas.name,
+			count: countWhen(saving),
+			steam: sumWhen(saving, sql`${F.steamLoss}`),
+			heat: sumWhen(saving, sql`${F.heatLoss}`),
+			fuel: sumWhen(saving, sql`${F.fuelEnergy}`),
+			cost: sumWhen(saving, sql`${F.cost}`),
+			co2: sumWhen(saving, sql`${F.co2}`),
+			water: sumWhen(saving, sql`${F.water}`),
+			repair: sumWhen(saving, sql`${F.repairCost}`),
+			withoutRepair: countWhen(sql`${saving} AND ${F.repairCost} IS NULL`),
+			outOfDate: countWhen(figuresOutOfDateSql(survey.basisId)),
+			withoutFigures: countWhen(
+				sql`${F.physicsEngine} <=> ${ENGINE_VERSION} AND ${F.resultsEngine} IS NULL`
+			)
+		})
+		.from(F)
+		.leftJoin(areas, eq(areas.id, F.areaId))
+		.where(and(eq(F.surveyId, survey.id), isNull(F.deletedAt)))
+		.groupBy(F.kind, F.areaId, areas.name);
+
+	const totals: SavingsTotals = {
+		count: 0,
+		steamKgH: 0,
+		heatKw: 0,
+		fuelGjYear: 0,
+		costMinor: 0,
+		co2KgYear: 0,
+		waterM3Year: 0,
+		repairCostMinor: 0,
+		withoutRepairCost: 0,
+		paybackYears: null,
+		currency: survey.currency,
+		outOfDate: 0,
+		withoutFigures: 0
+	};
+	const byKind = new Map<string, SavingsGroup>();
+	const byArea = new Map<string | null, SavingsGroup>();
+	const into = (
+		map: Map<string | null, SavingsGroup>,
+		key: string | null,
+		label: string,
+		g: (typeof groups)[number]
+	) => {
+		const group = map.get(key) ?? {
+			key,
+			label,
+			count: 0,
+			costMinor: 0,
+			repairCostMinor: 0,
+			co2KgYear: 0
+		};
+		group.count += num(g.count);
+		group.costMinor += num(g.cost);
+		group.repairCostMinor += num(g.repair);
+		group.co2KgYear += num(g.co2);
+		map.set(key, group);
+	};
+	for (const g of groups) {
+		totals.outOfDate += num(g.outOfDate);
+		totals.withoutFigures += num(g.withoutFigures);
+		if (num(g.count) === 0) continue;
+		totals.count += num(g.count);
+		totals.steamKgH += num(g.steam);
+		totals.heatKw += num(g.heat);
+		totals.fuelGjYear += num(g.fuel);
+		totals.costMinor += num(g.cost);
+		totals.co2KgYear += num(g.co2);
+		totals.waterM3Year += num(g.water);
+		totals.repairCostMinor += num(g.repair);
+		totals.withoutRepairCost += num(g.withoutRepair);
+		into(byKind as Map<string | null, SavingsGroup>, g.kind, kindWords(g.kind), g);
+		into(byArea, g.areaId, g.area ?? 'No area', g);
+	}
+	// No repair priced at all is an unknown cost, not a free one.
+	const priced = totals.withoutRepairCost < totals.count;
+	totals.paybackYears = simplePaybackYears(
+		priced ? totals.repairCostMinor : null,
+		totals.costMinor
+	);
+	const kindOrder = (k: string | null) => FINDING_KINDS.indexOf(k as FindingKind);
+	return {
+		totals,
+		breakdown: {
+			kind: [...byKind.values()].sort(
+				(a, b) => bySaving(a, b) || kindOrder(a.key) - kindOrder(b.key)
+			),
+			area: [...byArea.values()].sort(bySaving)
+		}
+	};
+}

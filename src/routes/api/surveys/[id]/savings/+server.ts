@@ -1,0 +1,22 @@
+import { error } from '@sveltejs/kit';
+import { readSavingsQuery } from '$lib/schemas/savings';
+import { requireRole, requireSurveyAccess } from '$lib/server/policy';
+import { surveySavings } from '$lib/server/savings/survey-savings';
+import { privateJson } from '$lib/server/walk/respond';
+import type { RequestHandler } from './$types';
+
+/**
+ * The ranked savings list (docs/savings.md): a survey's findings that save money, ranked by
+ * annual saving, payback or CO2 avoided, with totals and a breakdown by kind and area. Staff
+ * of the survey's firm, and the client company's users once the survey is published (the
+ * Ladder's capability, then read access); 404 when hidden, 400 for a parameter it cannot read.
+ */
+export const GET: RequestHandler = async (event) => {
+	const user = requireRole(event, 'ladder.open');
+	const survey = await requireSurveyAccess(user, event.params.id, 'read');
+	const read = readSavingsQuery(event.url.searchParams);
+	if (!read.ok) error(400, read.message);
+	const list = await surveySavings(survey.id, read.query.rank);
+	if (!list) error(404, 'Not found.');
+	return privateJson(list);
+};
