@@ -14,6 +14,7 @@
 import { deskAreaMatrix } from './authorization-matrix.desk-areas';
 import { deskReviewMatrix } from './authorization-matrix.desk-review';
 import { deskSurveysMatrix } from './authorization-matrix.desk-surveys';
+import { savingsMatrix } from './authorization-matrix.savings';
 import {
 	type Case,
 	deskAction,
@@ -176,6 +177,7 @@ export const matrix: Record<string, Record<string, Case>> = {
 	...deskAreaMatrix,
 	...deskSurveysMatrix,
 	...deskReviewMatrix,
+	...savingsMatrix,
 
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }

@@ -30,6 +30,8 @@ export interface Tenant {
 	siteId: string;
 	/** The demo survey in the field (the tenant's auditor is assigned to it). */
 	surveyId: string;
+	/** A published survey of the demo site, so the demo client's users may see it. */
+	clientSurveyId: string;
 	targetUserId: string;
 	/** A finding on the brewhouse survey, and a device's deletion of it kept as a conflict. */
 	findingId: string;
@@ -185,6 +187,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		otherClientId: ids.otherClient,
 		siteId: site.id,
 		surveyId: survey.id,
+		clientSurveyId: ids.clientSurvey,
 		targetUserId: ids.target,
 		findingId: ids.finding,
 		conflictId: ids.conflict,
