@@ -188,7 +188,7 @@ async function coldView(cookie: string, query: string) {
 const ms = (v: number) => `${v.toFixed(1).padStart(6)} ms`;
 const seconds = (v: number) => `${(v / 1000).toFixed(2)} s`;
 
-const app = spawn('node', ['build'], {
+const app = spawn('node', ['server'], {
 	env: {
 		...process.env,
 		HOST: '127.0.0.1',

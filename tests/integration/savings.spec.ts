@@ -71,7 +71,12 @@ type Figures = 'current' | 'basis' | 'engine' | 'none';
 function planned(i: number) {
 	const kind = KINDS[i % 4];
 	const area = i % 5 === 4 ? null : areaRows[i % 3];
-	const header = i % 6 === 0 ? null : i % 2 ? { id: high, name: 'High pressure' } : low;
+	const header =
+		i % 6 === 0
+			? null
+			: i % 2
+				? { id: high, name: 'High pressure' }
+				: { id: low, name: 'Low pressure' };
 	// Most are current; every ninth is on the earlier basis, every thirteenth made by an older
 	// engine, every eleventh has no money figures at all.
 	const figures: Figures =
@@ -87,7 +92,7 @@ function planned(i: number) {
 		i,
 		kind,
 		area,
-		header: header === low ? { id: low, name: 'Low pressure' } : header,
+		header,
 		condition: kind === 'trap' ? 'failed-open' : kind === 'leak' ? 'medium' : null,
 		tag: kind === 'trap' ? `SV-${String(i).padStart(3, '0')}` : null,
 		location: `Bay ${String(i % 8).padStart(2, '0')}`,
