@@ -4,17 +4,11 @@
  */
 import { and, eq, exists, inArray, isNull, sql } from 'drizzle-orm';
 import { drizzle } from 'drizzle-orm/mysql2';
-import {
-	FINDING_KIND_LABELS,
-	FINDING_STATUS_LABELS,
-	LEAK_SIZE_CLASS_LABELS,
-	TRAP_CONDITION_LABELS,
-	type FindingKind,
-	type FindingStatus
-} from '../../schemas/finding-vocabulary';
+import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
 import { areas, assets, costBases, findingConflicts, findings as F, headers } from '../db/schema';
 import type { RowDataPacket } from 'mysql2';
 import type { Executor, PooledDb } from '../db/types';
+import { conditionWords, kindWords, statusWords } from '../finding-words';
 import { figureState, type FigureState } from '../pricing/state';
 import type { SurveyPricing } from './findings-query';
 
@@ -165,13 +159,6 @@ export async function pageRows(db: PooledDb, ids: string[], survey: SurveyPricin
 	});
 }
 
-const conditionWords = (c: string | null) =>
-	c === null
-		? null
-		: ((TRAP_CONDITION_LABELS as Record<string, string>)[c] ??
-			(LEAK_SIZE_CLASS_LABELS as Record<string, string>)[c] ??
-			c);
-
 function itemOf(r: PageRow, survey: SurveyPricing, currency: string): FindingItem {
 	const { physicsEngine, resultsEngine, pricedBasisId, ...rest } = r;
 	const kind = r.kind as FindingKind;
@@ -179,11 +166,11 @@ function itemOf(r: PageRow, survey: SurveyPricing, currency: string): FindingIte
 	return {
 		...rest,
 		kind,
-		kindWords: FINDING_KIND_LABELS[kind] ?? r.kind,
+		kindWords: kindWords(r.kind),
 		location: r.location ?? '',
 		conditionWords: conditionWords(r.condition),
 		status,
-		statusWords: FINDING_STATUS_LABELS[status] ?? r.status,
+		statusWords: statusWords(r.status),
 		reviewed: r.reviewedAt !== null,
 		recordedAt: r.recordedAt?.toISOString() ?? null,
 		currency,

@@ -11,7 +11,7 @@ import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabular
 import { areas, assets, findings as F, headers } from '../db/schema';
 import type { Executor } from '../db/types';
 import { figuresCurrentSql } from '../pricing/state';
-import { conditionWords, kindWords, statusWords } from './words';
+import { conditionWords, kindWords, statusWords } from '../finding-words';
 
 export interface SavingsItem {
 	/** 1-based place in the ranking. */

@@ -12,7 +12,7 @@ import type { Executor } from '../db/types';
 import { figuresOutOfDateSql } from '../pricing/state';
 import { ENGINE_VERSION } from '../../steam/version';
 import { savingFindingSql } from './ranked-list';
-import { kindWords } from './words';
+import { kindWords } from '../finding-words';
 
 export interface SavingsTotals {
 	/** Saving findings (every one, also past the list's cut). */

@@ -6,7 +6,7 @@ import {
 	TRAP_CONDITION_LABELS,
 	type FindingKind,
 	type FindingStatus
-} from '../../schemas/finding-vocabulary';
+} from '../schemas/finding-vocabulary';
 
 export const kindWords = (kind: string): string => FINDING_KIND_LABELS[kind as FindingKind] ?? kind;
 
