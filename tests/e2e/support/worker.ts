@@ -35,8 +35,14 @@ export async function waitForActiveWorker(page: Page): Promise<void> {
 /** Signs a demo person in through the sign-in page of this browser context. */
 export async function signInHere(page: Page, email: string, password: string, next = '/walk') {
 	await page.goto(`/signin?next=${encodeURIComponent(next)}`);
-	await page.getByLabel('E-mail address').fill(email);
-	await page.getByLabel('Password').fill(password);
-	await page.getByRole('button', { name: 'Sign in' }).click();
-	await page.waitForURL((url) => url.pathname === next);
+	// The page can hydrate between the fills and the click and put its own empty values back
+	// (the browser then refuses the empty form and nothing is sent): fill and send again until
+	// the sign-in goes through.
+	await expect(async () => {
+		if (new URL(page.url()).pathname === next) return;
+		await page.getByLabel('E-mail address').fill(email);
+		await page.getByLabel('Password').fill(password);
+		await page.getByRole('button', { name: 'Sign in' }).click();
+		await page.waitForURL((url) => url.pathname === next, { timeout: 5_000 });
+	}).toPass({ timeout: 25_000 });
 }
