@@ -46,8 +46,11 @@ export interface FindingItem {
 /** The page's ids as one JSON array (JSON_TABLE), in the database's collation (scripts/db.sh). */
 const pageIdList = sql`(SELECT page.id FROM JSON_TABLE(${sql.placeholder('ids')}, '$[*]' COLUMNS (id VARCHAR(36) COLLATE utf8mb4_unicode_ci PATH '$')) AS page)`;
 
+/** A Drizzle handle with no connection, only to write the statement (never run through it). */
+const statements = drizzle.mock({ mode: 'default' });
+
 const conflictWaiting = exists(
-	rowsDb()
+	statements
 		.select({ one: sql`1` })
 		.from(findingConflicts)
 		.where(
@@ -88,13 +91,8 @@ const FIELDS = {
 };
 const KEYS = Object.keys(FIELDS) as (keyof typeof FIELDS)[];
 
-/** A Drizzle handle with no connection, only to write the statement (never run through it). */
-function rowsDb() {
-	return drizzle.mock({ mode: 'default' });
-}
-
 const pageRowsQuery = () =>
-	rowsDb()
+	statements
 		.select(FIELDS)
 		.from(F)
 		.leftJoin(assets, eq(assets.id, F.assetId))
