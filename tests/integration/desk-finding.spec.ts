@@ -10,8 +10,10 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FindingCapture, TrapCapture } from '../../src/lib/schemas/capture';
 import type { FindingEditForm } from '../../src/lib/schemas/desk-finding';
+import { findingsQuerySchema } from '../../src/lib/schemas/desk-findings';
 import { pullResponseSchema, pushResponseSchema } from '../../src/lib/schemas/sync';
 import * as schema from '../../src/lib/server/db/schema';
+import { findingsPage, surveyPricing } from '../../src/lib/server/desk/findings-query';
 import {
 	listConflicts,
 	openConflict,
@@ -43,6 +45,13 @@ const mine: string[] = [];
 
 const row = async (id: string) =>
 	(await db.select().from(schema.findings).where(eq(schema.findings.id, id)))[0];
+
+/** The finding's row as the review table's API answers it (its kept pages included). */
+async function tableRow(id: string) {
+	const survey = await surveyPricing(db, fieldSurveyId);
+	const page = await findingsPage(db, survey!, findingsQuerySchema.parse({ q: TAG, size: '200' }));
+	return page.items.find((i) => i.id === id);
+}
 const auditRows = async (id: string) =>
 	db.select().from(schema.auditLog).where(eq(schema.auditLog.entityId, id));
 
@@ -279,7 +288,11 @@ describe('settling sync conflicts', () => {
 			db
 		);
 		version = 2;
+		// The review table's page is read (and kept) before the device's stale edit arrives…
+		expect((await tableRow(trap.id))?.conflictWaiting).toBe(false);
 		const c = await conflict('Device note A');
+		// …and shows the conflict waiting at once: recording it moved the firm's counter.
+		expect((await tableRow(trap.id))?.conflictWaiting).toBe(true);
 		const listed = await listConflicts(consultantA, fieldSurveyId, db);
 		expect(listed!.waiting.map((w) => w.id)).toContain(c.id);
 		const page = await openConflict(consultantA, fieldSurveyId, c.id, db);
@@ -293,6 +306,7 @@ describe('settling sync conflicts', () => {
 		);
 		expect(outcome).toEqual({ kind: 'resolved', version: 3 });
 		version = 3;
+		expect((await tableRow(trap.id))?.conflictWaiting).toBe(false);
 		const after = await row(trap.id);
 		expect(after).toMatchObject({ version: 3, notes: 'Desk note' });
 		const [settled] = await db

@@ -1,8 +1,9 @@
 /**
  * The review table's views, kept between requests: for one survey and one filter, the totals;
- * for one filter and one order, every matching finding's id in that order (a page is a slice).
- * A consultant paging, re-sorting or twenty people on the same survey then cost one small query
- * for the page's rows instead of a scan of the survey's findings each.
+ * for one filter and one order, every matching finding's id in that order (a page is a slice);
+ * and each page's rows once read. A consultant paging or re-sorting then costs one small query
+ * for a page's rows instead of a scan of the survey's findings, and twenty people on the same
+ * page cost none.
  *
  * Keys hold everything a view depends on, so an entry is never served for data it was not made
  * from: the survey, the basis its figures count as current on, and the firm's change counter
@@ -17,6 +18,8 @@ import { LRUCache } from 'lru-cache';
 
 /** Ids held at most (about 60 bytes each): the size bound of the id lists. */
 export const VIEW_CACHE_IDS = 500_000;
+/** Rows of kept pages held at most (under a kilobyte each). */
+export const VIEW_CACHE_PAGE_ITEMS = 50_000;
 /** Totals entries held at most. */
 export const VIEW_CACHE_TOTALS = 2_000;
 /** No view is served older than this, whatever the counter says. */

@@ -15,7 +15,12 @@ import { areas, assets, changeCounters, costBases, findings as F } from '../db/s
 import { headers, sites, surveys } from '../db/schema';
 import type { Executor, PooledDb } from '../db/types';
 import { figuresCurrentSql, figuresOutOfDateSql, surveyBasisSql } from '../pricing/state';
-import { VIEW_CACHE_IDS, VIEW_CACHE_TOTALS, viewCache } from './findings-cache';
+import {
+	VIEW_CACHE_IDS,
+	VIEW_CACHE_PAGE_ITEMS,
+	VIEW_CACHE_TOTALS,
+	viewCache
+} from './findings-cache';
 import { pageRows, type FindingItem } from './findings-rows';
 
 export type { FindingItem };
@@ -209,6 +214,10 @@ interface Counted {
 
 const idViews = viewCache<string[]>({ maxSize: VIEW_CACHE_IDS, size: (ids) => ids.length + 1 });
 const totalViews = viewCache<Counted>({ max: VIEW_CACHE_TOTALS });
+const pageViews = viewCache<FindingItem[]>({
+	maxSize: VIEW_CACHE_PAGE_ITEMS,
+	size: (items) => items.length + 1
+});
 
 /** What a filter's answer depends on: the survey, its basis, the counter, the filter itself. */
 function filterKey(survey: SurveyPricing, q: FindingsQuery): string {
@@ -216,6 +225,7 @@ function filterKey(survey: SurveyPricing, q: FindingsQuery): string {
 	return JSON.stringify([
 		survey.id,
 		survey.basisId,
+		survey.currency,
 		survey.revision,
 		set(q.kind),
 		set(q.area),
@@ -238,6 +248,9 @@ export async function findingsPage(
 		totalViews(filter, () => totalsOf(db, survey, q))
 	]);
 	const start = (q.page - 1) * q.size;
-	const items = await pageRows(db, ids.slice(start, start + q.size), survey);
+	// The page's rows hang on the same counter as its ids (every write they show moves it).
+	const items = await pageViews(`${filter}|${q.sort}|${q.dir}|${q.page}|${q.size}`, () =>
+		pageRows(db, ids.slice(start, start + q.size), survey)
+	);
 	return { items, total: counted.total, page: q.page, size: q.size, totals: counted.totals };
 }

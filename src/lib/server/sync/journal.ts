@@ -8,6 +8,7 @@ import type { Mutation, MutationResult } from '../../schemas/sync';
 import { auditLog, findingConflicts } from '../db/schema';
 import type { Tx } from '../db/types';
 import type { PushContext } from './context';
+import { touchFirm } from './counter';
 
 export async function auditFinding(
 	tx: Tx,
@@ -52,6 +53,8 @@ export async function keepConflict(
 		serverVersion,
 		data
 	});
+	// The finding's row now shows a conflict waiting: the Desk's kept views must expire.
+	await touchFirm(tx, ctx.user.firmId);
 	await auditFinding(tx, ctx, m.id, 'conflict', null, {
 		op: m.op,
 		baseVersion: m.baseVersion,
