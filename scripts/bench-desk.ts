@@ -3,7 +3,9 @@
  * fresh database of its own (steamwisp_bench_desk) with the demo scenario:
  * 1. the review table's API at 10,000 findings in one survey: autocannon, 20 connections, a
  *    consultant's session, four views (default, cost biggest first, kind + text search, page
- *    100) — p50/p95/p99 latency and requests per second (target p95 ≤ 100 ms); then each view's
+ *    100) — p50/p95/p99 latency and requests per second (target p95 ≤ 100 ms); a walk in which
+ *    every request asks for a page not asked for before (each order both ways, page by page:
+ *    the page's rows read from the database, not kept); then each view's
  *    first request, one at a time, after the firm's change counter moved (the view's kept ids
  *    and totals expired: what a consultant waits for after a change, docs/desk.md "Kept views");
  * 2. re-pricing a site of 100,000 findings after a cost-basis change (saveCostBasis, money from
@@ -18,6 +20,7 @@ import { join } from 'node:path';
 import autocannon from 'autocannon';
 import { drizzle } from 'drizzle-orm/mysql2';
 import mysql from 'mysql2/promise';
+import { FINDING_SORT_KEYS } from '../src/lib/schemas/desk-findings';
 import * as schema from '../src/lib/server/db/schema';
 import { saveCostBasis } from '../src/lib/server/pricing/cost-basis';
 import { recomputeSite } from '../src/lib/server/pricing/refresh';
@@ -142,16 +145,29 @@ async function signIn(): Promise<string> {
 const percentile = (sorted: number[], p: number) =>
 	sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
 
-/** One view under load: latencies of every answer (autocannon's own table has no p95). */
-async function load(cookie: string, query: string) {
-	const url = `${ORIGIN}/api/surveys/${tableSurvey}/findings${query}`;
+const tablePath = (query: string) => `/api/surveys/${tableSurvey}/findings${query}`;
+
+/**
+ * One view under load: latencies of every answer (autocannon's own table has no p95). With
+ * `next`, each request asks for the query `next()` gives instead (a walk through pages).
+ */
+async function load(cookie: string, query: string, next?: () => string) {
+	const url = `${ORIGIN}${tablePath(query)}`;
 	const check = await fetch(url, { headers: { cookie } });
 	const body = (await check.json()) as { total: number; items: unknown[] };
 	if (!check.ok) throw new Error(`${query} answered ${check.status}`);
 	const times: number[] = [];
 	const result = await new Promise<autocannon.Result>((resolve, reject) => {
 		const instance = autocannon(
-			{ url, connections: 20, duration: SECONDS_PER_VIEW, headers: { cookie } },
+			{
+				url,
+				connections: 20,
+				duration: SECONDS_PER_VIEW,
+				headers: { cookie },
+				...(next && {
+					requests: [{ setupRequest: (req) => ({ ...req, path: tablePath(next()) }) }]
+				})
+			},
 			(err, res) => (err ? reject(err) : resolve(res))
 		);
 		instance.on('response', (_client, _status, _bytes, ms) => times.push(ms));
@@ -215,12 +231,23 @@ try {
 	console.log(
 		`  view                          rows        p50        p95        p99     req/s   target p95 ≤ 100 ms`
 	);
-	for (const [name, query] of views) {
-		const r = await load(cookie, query);
+	const row = (name: string, r: Awaited<ReturnType<typeof load>>) =>
 		console.log(
 			`  ${name.padEnd(28)} ${r.rows.padEnd(10)} ${ms(r.p50)} ${ms(r.p95)} ${ms(r.p99)} ${r.rps.toFixed(0).padStart(8)}${r.failed ? `   (${r.failed} failed)` : ''}`
 		);
-	}
+	for (const [name, query] of views) row(name, await load(cookie, query));
+	// Every request a page nobody has asked for yet: each order both ways, pages 1→200 in turn
+	// (a page's rows are read from the database; each order's ids once).
+	const pages = Math.ceil(TABLE_FINDINGS / 50);
+	const unseen = FINDING_SORT_KEYS.flatMap((sort) =>
+		(['asc', 'desc'] as const).flatMap((dir) =>
+			Array.from({ length: pages }, (_, i) => `?sort=${sort}&dir=${dir}&page=${i + 1}`)
+		)
+	);
+	let walked = 0;
+	const walk = await load(cookie, unseen[walked++], () => unseen[walked++ % unseen.length]);
+	row('a page not asked for before', walk);
+	if (walked > unseen.length) console.log(`  (the walk went round: ${walked} requests)`);
 	console.log(
 		`  first request of a view after a change (kept view expired), one at a time, ${COLD_ROUNDS} rounds:`
 	);

@@ -111,14 +111,46 @@ type PageRow = Awaited<ReturnType<typeof pageRowsQuery>>[number];
  */
 const PAGE_ROWS_SQL = pageRowsQuery().toSQL().sql;
 
+/** Each field's place in the statement's answer. */
+const AT = Object.fromEntries(KEYS.map((k, i) => [k, i])) as Record<keyof PageRow, number>;
+
 async function readPageRows(db: PooledDb, ids: string[]): Promise<PageRow[]> {
 	const [arrays] = await db.$client.query<RowDataPacket[]>(
 		{ sql: PAGE_ROWS_SQL, rowsAsArray: true },
 		[JSON.stringify(ids)]
 	);
-	return (arrays as unknown as unknown[][]).map(
-		(values) => Object.fromEntries(KEYS.map((k, i) => [k, values[i]])) as PageRow
-	);
+	return (arrays as unknown as unknown[][]).map(rowOf);
+}
+
+/** A row as an object of one fixed shape, field by field (a page maps 50 of them per request). */
+function rowOf(v: unknown[]): PageRow {
+	const f = <K extends keyof PageRow>(k: K) => v[AT[k]] as PageRow[K];
+	return {
+		id: f('id'),
+		kind: f('kind'),
+		tag: f('tag'),
+		location: f('location'),
+		area: f('area'),
+		header: f('header'),
+		condition: f('condition'),
+		status: f('status'),
+		reviewedAt: f('reviewedAt'),
+		recordedAt: f('recordedAt'),
+		steamKgH: f('steamKgH'),
+		heatKw: f('heatKw'),
+		fuelGjYear: f('fuelGjYear'),
+		costMinor: f('costMinor'),
+		co2KgYear: f('co2KgYear'),
+		waterM3Year: f('waterM3Year'),
+		repairCostMinor: f('repairCostMinor'),
+		paybackYears: f('paybackYears'),
+		physicsEngine: f('physicsEngine'),
+		resultsEngine: f('resultsEngine'),
+		pricedBasisId: f('pricedBasisId'),
+		pricingNote: f('pricingNote'),
+		photoCount: f('photoCount'),
+		conflictWaiting: f('conflictWaiting')
+	};
 }
 
 /**
@@ -158,21 +190,31 @@ export async function pageRows(db: PooledDb, ids: string[], survey: SurveyPricin
 }
 
 function itemOf(r: PageRow, survey: SurveyPricing, currency: string): FindingItem {
-	const { physicsEngine, resultsEngine, pricedBasisId, ...rest } = r;
-	const kind = r.kind as FindingKind;
-	const status = r.status as FindingStatus;
 	return {
-		...rest,
-		kind,
+		id: r.id,
+		kind: r.kind as FindingKind,
 		kindWords: kindWords(r.kind),
+		tag: r.tag,
 		location: r.location ?? '',
+		area: r.area,
+		header: r.header,
+		condition: r.condition,
 		conditionWords: conditionWords(r.condition),
-		status,
+		status: r.status as FindingStatus,
 		statusWords: statusWords(r.status),
 		reviewed: r.reviewedAt !== null,
 		recordedAt: r.recordedAt?.toISOString() ?? null,
+		steamKgH: r.steamKgH,
+		heatKw: r.heatKw,
+		fuelGjYear: r.fuelGjYear,
+		costMinor: r.costMinor,
 		currency,
-		figureState: figureState({ physicsEngine, resultsEngine, pricedBasisId }, survey.basisId),
+		co2KgYear: r.co2KgYear,
+		waterM3Year: r.waterM3Year,
+		repairCostMinor: r.repairCostMinor,
+		paybackYears: r.paybackYears,
+		figureState: figureState(r, survey.basisId),
+		pricingNote: r.pricingNote,
 		photoCount: Number(r.photoCount),
 		conflictWaiting: Number(r.conflictWaiting) === 1
 	};
