@@ -9,7 +9,7 @@
  * probe which ids exist.
  */
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
-import { and, eq, exists, inArray, isNotNull, sql, type SQL } from 'drizzle-orm';
+import { and, eq, exists, inArray, isNotNull, sql, type Placeholder, type SQL } from 'drizzle-orm';
 import { uuidSchema } from '$lib/schemas/common';
 import type { Role } from '$lib/schemas/roles';
 import { db } from './db';
@@ -66,13 +66,35 @@ function demand(access: Access, need: 'read' | 'write'): void {
 	if (need === 'write' && access !== 'write') error(403, 'You may look at this but not change it.');
 }
 
-const assignedTo = (userId: string, surveyId: SQL | typeof surveys.id) =>
+const assignedTo = (userId: string | Placeholder, surveyId: SQL | typeof surveys.id) =>
 	exists(
 		db
 			.select({ one: sql`1` })
 			.from(surveyAuditors)
 			.where(and(eq(surveyAuditors.surveyId, surveyId), eq(surveyAuditors.userId, userId)))
 	);
+
+/**
+ * What a survey's access is decided on, for one person: prepared once (most API requests and
+ * pages ask it first, so its SQL is not written again on each).
+ */
+const surveyAccessRow = db
+	.select({
+		id: surveys.id,
+		firmId: surveys.firmId,
+		siteId: surveys.siteId,
+		clientCompanyId: sites.clientCompanyId,
+		publishedAt: surveys.publishedAt,
+		assigned: sql<number>`${assignedTo(sql.placeholder('userId'), surveys.id)}`
+	})
+	.from(surveys)
+	.innerJoin(sites, eq(sites.id, surveys.siteId))
+	// Firm filter in the query too: a bug in the decision below still cannot cross tenants.
+	.where(
+		and(eq(surveys.id, sql.placeholder('surveyId')), eq(surveys.firmId, sql.placeholder('firmId')))
+	)
+	.limit(1)
+	.prepare();
 
 /** One survey the person may see (read) or change (write); 404 when hidden, 403 read-only. */
 export async function requireSurveyAccess(
@@ -81,20 +103,11 @@ export async function requireSurveyAccess(
 	need: 'read' | 'write' = 'read'
 ) {
 	if (!uuidSchema.safeParse(surveyId).success) hide();
-	const [row] = await db
-		.select({
-			id: surveys.id,
-			firmId: surveys.firmId,
-			siteId: surveys.siteId,
-			clientCompanyId: sites.clientCompanyId,
-			publishedAt: surveys.publishedAt,
-			assigned: sql<number>`${assignedTo(user.id, surveys.id)}`
-		})
-		.from(surveys)
-		.innerJoin(sites, eq(sites.id, surveys.siteId))
-		// Firm filter in the query too: a bug in the decision below still cannot cross tenants.
-		.where(and(eq(surveys.id, surveyId), eq(surveys.firmId, user.firmId)))
-		.limit(1);
+	const [row] = await surveyAccessRow.execute({
+		surveyId,
+		firmId: user.firmId,
+		userId: user.id
+	});
 	if (!row) hide();
 	const access = surveyAccess(user, {
 		firmId: row.firmId,
