@@ -1,12 +1,3 @@
-/**
- * A moment as the Desk writes it: day and time in UTC, said so (the server renders the page,
- * and the person's own clock zone is not known there), or "never".
- */
-export function when(d: Date | null): string {
-	if (!d) return 'never';
-	return `${d.toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' })} UTC`;
-}
-
 /** A calendar day (YYYY-MM-DD) as words, e.g. "20 Nov 2026"; "no date" when missing. */
 export function day(iso: string | null): string {
 	if (!iso) return 'no date';
