@@ -37,9 +37,8 @@ export interface SurveyPricing {
 	revision: number;
 }
 
-/** The survey's name and the basis its figures count as current on. */
-export async function surveyPricing(db: Executor, surveyId: string): Promise<SurveyPricing | null> {
-	const [row] = await db
+const pricingQuery = (db: Executor) =>
+	db
 		.select({
 			id: surveys.id,
 			name: surveys.name,
@@ -55,8 +54,18 @@ export async function surveyPricing(db: Executor, surveyId: string): Promise<Sur
 		})
 		.from(surveys)
 		.innerJoin(sites, eq(sites.id, surveys.siteId))
-		.where(eq(surveys.id, surveyId))
-		.limit(1);
+		.where(eq(surveys.id, sql.placeholder('surveyId')))
+		.limit(1)
+		.prepare();
+
+/** The statement prepared once per database handle (the app's lives as long as the app). */
+const prepared = new WeakMap<Executor, ReturnType<typeof pricingQuery>>();
+
+/** The survey's name and the basis its figures count as current on. */
+export async function surveyPricing(db: Executor, surveyId: string): Promise<SurveyPricing | null> {
+	let query = prepared.get(db);
+	if (!query) prepared.set(db, (query = pricingQuery(db)));
+	const [row] = await query.execute({ surveyId });
 	if (!row) return null;
 	const { basisCurrency, siteCurrency, revision, ...rest } = row;
 	return { ...rest, currency: basisCurrency ?? siteCurrency, revision: Number(revision ?? 0) };
