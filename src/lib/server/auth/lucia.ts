@@ -1,12 +1,56 @@
 import { DrizzleMySQLAdapter } from '@lucia-auth/adapter-drizzle';
-import { Lucia, TimeSpan } from 'lucia';
+import { eq, sql } from 'drizzle-orm';
+import { Lucia, TimeSpan, type DatabaseSession, type DatabaseUser } from 'lucia';
 import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { db } from '../db';
 import { sessions, users } from '../db/schema';
 import type { Role } from '$lib/schemas/roles';
 
-const adapter = new DrizzleMySQLAdapter(db, sessions, users);
+/**
+ * Drizzle's adapter, reading a session and its person with one statement prepared once and
+ * only the columns the app uses (every signed-in request asks it; the stock query selects the
+ * whole users row, password hash included, written again each time).
+ */
+class SessionAdapter extends DrizzleMySQLAdapter {
+	private readonly sessionAndUser = db
+		.select({
+			session: {
+				id: sessions.id,
+				userId: sessions.userId,
+				expiresAt: sessions.expiresAt,
+				userAgent: sessions.userAgent
+			},
+			user: {
+				id: users.id,
+				firmId: users.firmId,
+				email: users.email,
+				name: users.name,
+				role: users.role,
+				clientCompanyId: users.clientCompanyId,
+				disabledAt: users.disabledAt
+			}
+		})
+		.from(sessions)
+		.innerJoin(users, eq(sessions.userId, users.id))
+		.where(eq(sessions.id, sql.placeholder('id')))
+		.prepare();
+
+	override async getSessionAndUser(
+		sessionId: string
+	): Promise<[DatabaseSession, DatabaseUser] | [null, null]> {
+		const rows = await this.sessionAndUser.execute({ id: sessionId });
+		if (rows.length !== 1) return [null, null];
+		const { id, userId, expiresAt, ...sessionAttributes } = rows[0].session;
+		const { id: personId, ...userAttributes } = rows[0].user;
+		return [
+			{ id, userId, expiresAt, attributes: sessionAttributes },
+			{ id: personId, attributes: userAttributes }
+		];
+	}
+}
+
+const adapter = new SessionAdapter(db, sessions, users);
 
 /**
  * Sessions: 12-hour lifetime, extended on use (lucia refreshes a session in its second half);
