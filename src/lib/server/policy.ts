@@ -14,6 +14,7 @@ import { uuidSchema } from '$lib/schemas/common';
 import type { Role } from '$lib/schemas/roles';
 import { db } from './db';
 import { sites, surveyAuditors, surveys, users } from './db/schema';
+import { personColumns } from './auth/person-columns';
 import { type Access, personAccess, siteAccess, surveyAccess } from './policy/decide';
 import { gate, roleCan, type Capability } from './policy/table';
 
@@ -161,15 +162,7 @@ export async function requirePerson(
 ) {
 	if (!uuidSchema.safeParse(personId).success) hide();
 	const [row] = await db
-		.select({
-			id: users.id,
-			firmId: users.firmId,
-			email: users.email,
-			name: users.name,
-			role: users.role,
-			clientCompanyId: users.clientCompanyId,
-			disabledAt: users.disabledAt
-		})
+		.select(personColumns)
 		.from(users)
 		.where(and(eq(users.id, personId), eq(users.firmId, user.firmId)))
 		.limit(1);

@@ -5,6 +5,7 @@ import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { db } from '../db';
 import { sessions, users } from '../db/schema';
+import { personColumns } from './person-columns';
 import type { Role } from '$lib/schemas/roles';
 
 /**
@@ -21,15 +22,7 @@ class SessionAdapter extends DrizzleMySQLAdapter {
 				expiresAt: sessions.expiresAt,
 				userAgent: sessions.userAgent
 			},
-			user: {
-				id: users.id,
-				firmId: users.firmId,
-				email: users.email,
-				name: users.name,
-				role: users.role,
-				clientCompanyId: users.clientCompanyId,
-				disabledAt: users.disabledAt
-			}
+			user: personColumns
 		})
 		.from(sessions)
 		.innerJoin(users, eq(sessions.userId, users.id))
