@@ -69,8 +69,8 @@ type Figures = { currency: string; paybackYears?: number | null } & Record<
 	number | null
 >;
 
-/** One cell's text, for a row or the totals (totals have no payback: an empty cell). */
-function cellText(f: Figures, column: FigureColumn, system: UnitSystemId): string {
+/** One cell's text, for a row or the totals (totals have no payback: an empty cell); the savings page shares it. */
+export function cellText(f: Figures, column: FigureColumn, system: UnitSystemId): string {
 	switch (column) {
 		case 'steam':
 			return quantity(column, f.steamKgH, system);
