@@ -9,3 +9,4 @@ export * from './schema/client';
 export * from './schema/audit';
 export * from './schema/auth';
 export * from './schema/sync';
+export * from './schema/publish';

@@ -13,6 +13,7 @@ import { findingCaptureSchema, type FindingCapture } from '../../schemas/capture
 import { recordChange } from '../audit';
 import { findingConflicts, findings, users } from '../db/schema';
 import type { Db, Executor } from '../db/types';
+import { findingsFrozen } from '../publish/lock';
 import { lockFinding } from '../sync/lock';
 import { compareCaptures, mergeCaptures, type FieldRow } from './conflict-fields';
 import { deskSurvey, editSite, findingOfSurvey } from './finding-detail';
@@ -152,6 +153,8 @@ export type ResolveOutcome =
 	| { kind: 'missing' }
 	| { kind: 'settled' }
 	| { kind: 'moved' }
+	/** The survey is published: its findings stay as they went to the client. */
+	| { kind: 'frozen' }
 	| { kind: 'refused'; message: string; errors: Record<string, string> };
 
 export interface ResolveInput {
@@ -175,6 +178,8 @@ class Refusal extends Error {
 export async function resolveConflict(db: Db, input: ResolveInput): Promise<ResolveOutcome> {
 	try {
 		return await db.transaction(async (tx) => {
+			// The survey row before the finding's, in the order a publication takes them.
+			if (await findingsFrozen(tx, input.surveyId)) return { kind: 'frozen' as const };
 			const [row] = await tx
 				.select()
 				.from(findingConflicts)
@@ -233,6 +238,7 @@ export async function resolveConflict(db: Db, input: ResolveInput): Promise<Reso
 				extra: { conflictId: row.id, resolutionKind: input.how }
 			});
 			if (outcome.kind === 'moved') return { kind: 'moved' as const };
+			if (outcome.kind === 'frozen') return { kind: 'frozen' as const };
 			if (outcome.kind === 'missing') return { kind: 'missing' as const };
 			if (outcome.kind === 'misplaced') return refuse(outcome.message);
 			await tx

@@ -14,6 +14,7 @@ import { assets, findings, sites, surveys } from '../db/schema';
 import type { Db, Tx } from '../db/types';
 import { pricingContext } from '../pricing/context';
 import { figureColumns } from '../pricing/figures';
+import { findingsFrozen } from '../publish/lock';
 import { misplaced } from '../sync/price';
 import { nextChangeSeq } from '../sync/counter';
 import { lockFinding, type LockedFinding } from '../sync/lock';
@@ -35,7 +36,9 @@ export type WriteOutcome =
 	| { kind: 'written'; version: number; before: Record<string, unknown>; after: unknown }
 	| { kind: 'moved'; version: number }
 	| { kind: 'missing' }
-	| { kind: 'misplaced'; message: string; field: 'headerId' | 'areaId' };
+	| { kind: 'misplaced'; message: string; field: 'headerId' | 'areaId' }
+	/** The survey is published: its findings are frozen until a correction is opened. */
+	| { kind: 'frozen' };
 
 export interface WriteTarget {
 	firmId: string;
@@ -81,6 +84,7 @@ export async function writeNextVersion(
 ): Promise<WriteOutcome> {
 	const survey = await surveyPricing(tx, target.firmId, target.surveyId);
 	if (!survey) return { kind: 'missing' };
+	if (await findingsFrozen(tx, target.surveyId)) return { kind: 'frozen' };
 	const found = await lockFinding(tx, target.findingId);
 	if (!found || found.row.surveyId !== target.surveyId) return { kind: 'missing' };
 	const row = found.row;
@@ -148,6 +152,8 @@ export async function editFinding(
 	repairCost: number | null
 ): Promise<WriteOutcome> {
 	return db.transaction(async (tx) => {
+		// The survey row before the finding's, in the order a publication takes them.
+		if (await findingsFrozen(tx, target.surveyId)) return { kind: 'frozen' as const };
 		const found = await lockFinding(tx, target.findingId);
 		if (!found || found.row.deletedAt) return { kind: 'missing' as const };
 		return writeNextVersion(tx, target, { op: 'write', capture, repairCost });

@@ -62,15 +62,18 @@ export async function saveFindingEdit(
 	);
 }
 
-/** Marks one finding reviewed or not; false when it is not a live finding of the survey. */
+/**
+ * Marks one finding reviewed or not: `missing` when it is not a live finding of the survey,
+ * `frozen` when the survey is published.
+ */
 export async function reviewFinding(
 	user: SessionUser,
 	surveyId: string,
 	findingId: string,
 	reviewed: boolean,
 	db: Db = appDb
-): Promise<boolean> {
-	if (!(await deskSurvey(db, user.firmId, surveyId))) return false;
+): Promise<'done' | 'missing' | 'frozen'> {
+	if (!(await deskSurvey(db, user.firmId, surveyId))) return 'missing';
 	const outcome = await markReviewed(db, {
 		firmId: user.firmId,
 		actorId: user.id,
@@ -78,7 +81,8 @@ export async function reviewFinding(
 		findingIds: [findingId],
 		reviewed
 	});
-	return outcome.ok;
+	if (outcome.ok) return 'done';
+	return outcome.frozen ? 'frozen' : 'missing';
 }
 
 export async function listConflicts(user: SessionUser, surveyId: string, db: Db = appDb) {

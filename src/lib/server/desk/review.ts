@@ -12,6 +12,7 @@ import { and, eq, inArray, isNull } from 'drizzle-orm';
 import { recordChange } from '../audit';
 import { findings, surveys } from '../db/schema';
 import type { Db } from '../db/types';
+import { findingsFrozen } from '../publish/lock';
 import { touchFirm } from '../sync/counter';
 
 export interface ReviewInput {
@@ -24,12 +25,19 @@ export interface ReviewInput {
 }
 
 export type ReviewOutcome =
-	{ ok: true; changed: number; unchanged: number } | { ok: false; unknown: string[] };
+	| { ok: true; changed: number; unchanged: number }
+	| { ok: false; unknown: string[]; frozen: false }
+	/** The survey is published: its findings stay as they went to the client. */
+	| { ok: false; unknown: []; frozen: true };
 
 export async function markReviewed(db: Db, input: ReviewInput): Promise<ReviewOutcome> {
 	const ids = [...new Set(input.findingIds)];
 	if (ids.length === 0) return { ok: true, changed: 0, unchanged: 0 };
 	return db.transaction(async (tx) => {
+		// The survey row before the findings', in the order a publication takes them.
+		if (await findingsFrozen(tx, input.surveyId)) {
+			return { ok: false as const, unknown: [] as [], frozen: true as const };
+		}
 		const rows = await tx
 			.select({
 				id: findings.id,
@@ -50,7 +58,11 @@ export async function markReviewed(db: Db, input: ReviewInput): Promise<ReviewOu
 			.for('update');
 		if (rows.length !== ids.length) {
 			const found = new Set(rows.map((r) => r.id));
-			return { ok: false as const, unknown: ids.filter((id) => !found.has(id)) };
+			return {
+				ok: false as const,
+				unknown: ids.filter((id) => !found.has(id)),
+				frozen: false as const
+			};
 		}
 		const now = new Date();
 		let changed = 0;

@@ -15,6 +15,7 @@ import { recordChange } from '../audit';
 import { db } from '../db';
 import { findings, sites, surveyAuditors, surveys } from '../db/schema';
 import type { Tx } from '../db/types';
+import { DESK_LOCKED_MESSAGE, lockedStage } from '../publish/lock';
 import { nextChangeSeq, unassignAuditor } from '../sync/counter';
 import { assignablePeople } from './surveys';
 import { stageMoveProblem } from './survey-stage';
@@ -226,6 +227,7 @@ export function markReviewed(
 ): Promise<Outcome> {
 	return db.transaction(async (tx) => {
 		const row = await lockSurvey(tx, actor.firmId, surveyId);
+		if (lockedStage(row.status, row.publishedAt)) return refuse(DESK_LOCKED_MESSAGE, 'mark');
 		if (mark === 'reopen') {
 			if (row.reviewedAt === null) return refuse('Checking was not marked finished.', 'mark');
 		} else {

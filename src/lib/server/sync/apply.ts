@@ -8,6 +8,7 @@ import { eq } from 'drizzle-orm';
 import type { Mutation, MutationResult } from '../../schemas/sync';
 import { mutationResultSchema } from '../../schemas/sync';
 import { appliedMutations } from '../db/schema';
+import { DEVICE_LOCKED_REASON, findingsFrozen } from '../publish/lock';
 import type { Db, Tx } from '../db/types';
 import { RECORDING_STAGES, type PushContext } from './context';
 import { applyDelete } from './delete';
@@ -54,6 +55,11 @@ async function applyIn(tx: Tx, ctx: PushContext, m: Mutation): Promise<MutationR
 				'This survey is no longer open for recording (it is with the client or closed): ' +
 				'ask the consultant to reopen it, or to take this change at the desk'
 		};
+	}
+	// Read again under the survey row's lock: a publication committed since the batch was
+	// authorized freezes the findings (docs/publishing.md); the device keeps its change.
+	if (await findingsFrozen(tx, survey.id)) {
+		return { mutationId: m.mutationId, status: 'rejected', reason: DEVICE_LOCKED_REASON };
 	}
 	const result =
 		m.op === 'upsert'

@@ -3,6 +3,7 @@ import { bulkReviewSchema } from '$lib/schemas/desk-findings';
 import { reviewFindings, tableFacts } from '$lib/server/desk/findings-table';
 import { formProblem, parseForm } from '$lib/server/forms';
 import { requireRole, requireSurveyAccess } from '$lib/server/policy';
+import { DESK_LOCKED_MESSAGE } from '$lib/server/publish/lock';
 import type { Actions, PageServerLoad } from './$types';
 
 /** The table's frame: its rows come from GET /api/surveys/[id]/findings, fetched by the page. */
@@ -32,6 +33,7 @@ export const actions: Actions = {
 			findingIds: form.data.findingIds,
 			reviewed
 		});
+		if (!outcome.ok && outcome.frozen) return formProblem(409, DESK_LOCKED_MESSAGE);
 		if (!outcome.ok) {
 			return formProblem(
 				400,

@@ -1,6 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { uuidSchema } from '$lib/schemas/common';
 import { conflictFormSchema, mergeFormSchema } from '$lib/schemas/desk-finding';
+import { DESK_LOCKED_MESSAGE } from '$lib/server/publish/lock';
 import type { ResolutionKind, ResolveOutcome } from '$lib/server/desk/conflicts';
 import { MOVED_MESSAGE } from '$lib/server/desk/finding-edit';
 import { openConflict, settleConflict } from '$lib/server/desk/finding-pages';
@@ -40,6 +41,8 @@ function answer(how: ResolutionKind, outcome: ResolveOutcome, choices: Record<st
 			return formProblem(409, 'This conflict was already settled by someone else.');
 		case 'moved':
 			return formProblem(409, MOVED_MESSAGE, { values: choices });
+		case 'frozen':
+			return formProblem(409, DESK_LOCKED_MESSAGE, { values: choices });
 		case 'refused':
 			return formProblem(400, outcome.message, { values: choices, errors: outcome.errors });
 	}

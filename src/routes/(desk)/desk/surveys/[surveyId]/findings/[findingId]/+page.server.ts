@@ -5,6 +5,7 @@ import { MOVED_MESSAGE } from '$lib/server/desk/finding-edit';
 import { openFinding, reviewFinding, saveFindingEdit } from '$lib/server/desk/finding-pages';
 import { formProblem, parseForm } from '$lib/server/forms';
 import { requireRole, requireSurveyAccess } from '$lib/server/policy';
+import { DESK_LOCKED_MESSAGE } from '$lib/server/publish/lock';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 import { typedBack } from './typed-back';
 
@@ -55,6 +56,8 @@ export const actions: Actions = {
 					errors: { [outcome.field]: outcome.message },
 					error: `${outcome.message}. Nothing was saved.`
 				});
+			case 'frozen':
+				return fail(409, { action: 'edit', ...typed, errors: {}, error: DESK_LOCKED_MESSAGE });
 			case 'missing':
 				return hide();
 		}
@@ -65,7 +68,9 @@ export const actions: Actions = {
 		const form = await parseForm(event.request, reviewFormSchema);
 		if (!form.ok) return form.failure;
 		const reviewed = form.data.reviewed === 'yes';
-		if (!(await reviewFinding(user, surveyId, findingId, reviewed))) {
+		const outcome = await reviewFinding(user, surveyId, findingId, reviewed);
+		if (outcome === 'frozen') return formProblem(409, DESK_LOCKED_MESSAGE);
+		if (outcome === 'missing') {
 			return formProblem(404, 'This finding is not on the survey (or was deleted).');
 		}
 		return { action: 'review', reviewed };

@@ -1,0 +1,110 @@
+import {
+	double,
+	index,
+	int,
+	json,
+	mysqlTable,
+	primaryKey,
+	text,
+	tinyint,
+	unique,
+	varchar
+} from 'drizzle-orm/mysql-core';
+import { at, createdAt, id, money, uuid, word } from './columns';
+import { costBases } from './sites';
+import { surveys } from './surveys';
+import { users } from './tenancy';
+
+/** The totals of a published revision as they stood (SavingsTotals of $lib/server/savings). */
+export interface RevisionTotals {
+	count: number;
+	steamKgH: number;
+	heatKw: number;
+	fuelGjYear: number;
+	costMinor: number;
+	co2KgYear: number;
+	waterM3Year: number;
+	repairCostMinor: number;
+	withoutRepairCost: number;
+	paybackYears: number | null;
+	currency: string;
+	outOfDate: number;
+	withoutFigures: number;
+}
+
+/**
+ * One publication of a survey to its client company (docs/publishing.md): revision 1 is the
+ * first, each correction published after it the next, with a note of what changed. The
+ * figures the client sees are the revision's frozen snapshot (survey_revision_findings), priced
+ * on `cost_basis_id`.
+ */
+export const surveyRevisions = mysqlTable(
+	'survey_revisions',
+	{
+		id: id(),
+		surveyId: uuid('survey_id')
+			.notNull()
+			.references(() => surveys.id),
+		/** 1, 2, 3… per survey. */
+		number: int('number').notNull(),
+		publishedAt: at('published_at').notNull(),
+		publishedBy: uuid('published_by').references(() => users.id),
+		/** The cost basis the snapshot was priced on (the survey's frozen basis). */
+		costBasisId: uuid('cost_basis_id').references(() => costBases.id),
+		/** What changed since the revision before (required from revision 2 on). */
+		note: text('note'),
+		totals: json('totals').$type<RevisionTotals>().notNull(),
+		/** Findings in the snapshot. */
+		findingCount: int('finding_count').notNull(),
+		/** The client's users told by e-mail, and how many of those messages failed to send. */
+		mailSent: int('mail_sent').notNull().default(0),
+		mailFailed: int('mail_failed').notNull().default(0),
+		createdAt: createdAt()
+	},
+	(t) => [unique('survey_revisions_number_uq').on(t.surveyId, t.number)]
+);
+
+/**
+ * The published figures of every live finding of a revision, as they stood when it was
+ * published, written in one INSERT … SELECT: the client's view and the reports of a revision
+ * read these rows, so later edits, re-pricing or corrections never move them.
+ */
+export const surveyRevisionFindings = mysqlTable(
+	'survey_revision_findings',
+	{
+		revisionId: uuid('revision_id')
+			.notNull()
+			.references(() => surveyRevisions.id, { onDelete: 'cascade' }),
+		findingId: uuid('finding_id').notNull(),
+		kind: word('kind').notNull(),
+		status: word('status').notNull(),
+		condition: word('condition'),
+		tag: varchar('tag', { length: 64 }),
+		location: varchar('location', { length: 255 }),
+		areaId: uuid('area_id'),
+		areaName: varchar('area_name', { length: 160 }),
+		headerId: uuid('header_id'),
+		headerName: varchar('header_name', { length: 160 }),
+		measureId: uuid('measure_id'),
+		/** 1 when the figures were current on the revision's basis (the savings list's rule). */
+		figuresCurrent: tinyint('figures_current').notNull(),
+		steamLoss: double('steam_kg_h'),
+		heatLoss: double('heat_kw'),
+		fuelEnergy: double('fuel_gj'),
+		cost: money('cost_minor'),
+		co2: double('co2_kg'),
+		water: double('water_m3'),
+		repairCost: money('repair_cost_minor'),
+		paybackYears: double('payback_years'),
+		pricedBasisId: uuid('priced_basis_id'),
+		/** The finding's version when it was published. */
+		findingVersion: int('finding_version').notNull()
+	},
+	(t) => [
+		primaryKey({ columns: [t.revisionId, t.findingId] }),
+		index('survey_revision_findings_cost_idx').on(t.revisionId, t.cost),
+		index('survey_revision_findings_finding_idx').on(t.findingId)
+	]
+);
+
+export type SurveyRevisionRow = typeof surveyRevisions.$inferSelect;
