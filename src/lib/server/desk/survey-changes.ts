@@ -227,7 +227,8 @@ export function markReviewed(
 ): Promise<Outcome> {
 	return db.transaction(async (tx) => {
 		const row = await lockSurvey(tx, actor.firmId, surveyId);
-		if (lockedStage(row.status, row.publishedAt)) return refuse(DESK_LOCKED_MESSAGE, 'mark');
+		if (lockedStage(row.status, row.publishedAt !== null))
+			return refuse(DESK_LOCKED_MESSAGE, 'mark');
 		if (mark === 'reopen') {
 			if (row.reviewedAt === null) return refuse('Checking was not marked finished.', 'mark');
 		} else {

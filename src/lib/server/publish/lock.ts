@@ -5,7 +5,7 @@
  * writer's own transaction with a shared lock on the survey row, so a write and a publication
  * (which locks the row for update) never interleave: the snapshot and the lock see the same rows.
  */
-import { eq } from 'drizzle-orm';
+import { sql } from 'drizzle-orm';
 import { surveys } from '../db/schema';
 import type { Tx } from '../db/types';
 
@@ -18,16 +18,16 @@ export const DEVICE_LOCKED_REASON =
 	'to open a correction (your change stays on this device until then)';
 
 /** Whether a survey in this stage keeps its findings as published. */
-export const lockedStage = (stage: string, publishedAt: Date | null): boolean =>
-	stage === 'published' || (stage === 'closed' && publishedAt !== null);
+export const lockedStage = (stage: string, everPublished: boolean): boolean =>
+	stage === 'published' || (stage === 'closed' && everPublished);
 
 /** True when the survey's findings are frozen by a publication (the survey row share-locked). */
 export async function findingsFrozen(tx: Tx, surveyId: string): Promise<boolean> {
-	const [row] = await tx
-		.select({ stage: surveys.status, publishedAt: surveys.publishedAt })
-		.from(surveys)
-		.where(eq(surveys.id, surveyId))
-		.limit(1)
-		.for('share');
-	return row ? lockedStage(row.stage, row.publishedAt) : false;
+	// MariaDB has no FOR SHARE (Drizzle's `.for('share')`): its shared lock is LOCK IN SHARE MODE.
+	const [rows] = (await tx.execute(
+		sql`SELECT ${surveys.status} AS stage, ${surveys.publishedAt} IS NOT NULL AS published
+			FROM ${surveys} WHERE ${surveys.id} = ${surveyId} LOCK IN SHARE MODE`
+	)) as unknown as [{ stage: string; published: number | string }[]];
+	const row = rows[0];
+	return row ? lockedStage(row.stage, Number(row.published) === 1) : false;
 }

@@ -47,6 +47,11 @@ async function applyIn(tx: Tx, ctx: PushContext, m: Mutation): Promise<MutationR
 	if (seen) return replay(seen, ctx, m);
 	const survey = ctx.surveys.get(surveyOf(m));
 	if (!survey) throw new Error(`Survey of mutation ${m.mutationId} was not authorized`);
+	// Read under the survey row's lock: a publication committed since the batch was
+	// authorized freezes the findings (docs/publishing.md); the device keeps its change.
+	if (await findingsFrozen(tx, survey.id)) {
+		return { mutationId: m.mutationId, status: 'rejected', reason: DEVICE_LOCKED_REASON };
+	}
 	if (!RECORDING_STAGES.includes(survey.stage)) {
 		return {
 			mutationId: m.mutationId,
@@ -55,11 +60,6 @@ async function applyIn(tx: Tx, ctx: PushContext, m: Mutation): Promise<MutationR
 				'This survey is no longer open for recording (it is with the client or closed): ' +
 				'ask the consultant to reopen it, or to take this change at the desk'
 		};
-	}
-	// Read again under the survey row's lock: a publication committed since the batch was
-	// authorized freezes the findings (docs/publishing.md); the device keeps its change.
-	if (await findingsFrozen(tx, survey.id)) {
-		return { mutationId: m.mutationId, status: 'rejected', reason: DEVICE_LOCKED_REASON };
 	}
 	const result =
 		m.op === 'upsert'
