@@ -45,10 +45,11 @@ const findingDetail: Record<string, Record<string, Case>> = {
 			request: (t) => ({ path: findingPath(t), form: { version: '1' } }),
 			expect: refusedAction
 		},
-		// Marking not reviewed what is not reviewed changes nothing: harmless to repeat.
+		// The brewhouse survey is published, so its findings are frozen (docs/publishing.md): the
+		// firm's staff are refused with 409 and nothing changes; other firms' people get 404.
 		'POST ?/review': {
 			request: (t) => ({ path: findingPath(t), form: { reviewed: 'no' } }),
-			expect: deskAction({ own: 200, other: 404 }, { own: 200, other: 404 })
+			expect: deskAction({ own: 409, other: 404 }, { own: 409, other: 404 })
 		}
 	},
 	'/(desk)/desk/surveys/[surveyId]/conflicts': {

@@ -12,6 +12,14 @@ const refused = deskAction({ own: 400, other: 404 }, { own: 400, other: 404 });
 // to repeat. Publishing itself, readiness and the lock: tests/integration/publish.spec.ts and
 // tests/e2e/desk-publish.e2e.ts.
 export const publishMatrix: Record<string, Record<string, Case>> = {
+	// A published survey of the demo client's site: its users and the firm's staff see it; the
+	// other firm's people 404; auditors have no Ladder (403).
+	'/(ladder)/ladder/surveys/[surveyId]': {
+		GET: {
+			request: (t) => ({ path: `/ladder/surveys/${t.clientSurveyId}` }),
+			expect: { anonymous: 'signin', admin: mine, consultant: mine, auditor: 403, client: mine }
+		}
+	},
 	'/(desk)/desk/surveys/[surveyId]/publish': {
 		GET: {
 			request: (t) => ({ path: publishPath(t) }),

@@ -1,6 +1,8 @@
 import { expect, test } from '@playwright/test';
 import { demoPassword, demoUsers } from '../../src/lib/server/seed/demo';
+import { maltingsClientUser } from '../../src/lib/server/seed/maltings';
 import { openTestDb, rows, type Db } from './support/db';
+import { linkIn, waitForMail } from './support/mailbox';
 import { signInHere } from './support/worker';
 
 /**
@@ -21,6 +23,20 @@ test.beforeAll(() => {
 	db = openTestDb();
 });
 test.afterAll(async () => {
+	// Back to the seeded state (checked, in review, not published) for the files after this one;
+	// written past the app, so the firm's change counter moves and kept views are read again.
+	await rows(db, 'DELETE FROM survey_revisions WHERE survey_id = ?', [brackenford]);
+	await rows(
+		db,
+		`UPDATE surveys SET status = 'in-review', published_at = NULL, cost_basis_id = NULL
+		 WHERE id = ?`,
+		[brackenford]
+	);
+	await rows(
+		db,
+		'UPDATE change_counters SET value = value + 1 WHERE firm_id = (SELECT firm_id FROM surveys WHERE id = ?)',
+		[brackenford]
+	);
 	await db?.end();
 });
 
@@ -104,4 +120,101 @@ test('the savings page ranks three ways, with the chart and its numbers as text'
 	const bad = await page.goto(`${savings}?rank=cheapest`);
 	expect(bad?.status()).toBe(400);
 	await expect(page.getByText(/rank must be one of: savings, payback, co2/)).toBeVisible();
+});
+
+test('a consultant publishes, the client is told and reads it; a correction is revision 2', async ({
+	page,
+	browser
+}) => {
+	const since = new Date();
+	const publish = `/desk/surveys/${brackenford}/publish`;
+	await signInHere(page, consultant.email, demoPassword, `/desk/surveys/${brackenford}`);
+	await page.getByRole('link', { name: 'Publish to the client →' }).click();
+	await expect(page).toHaveURL(new RegExp(`${publish}$`));
+	await expect(page.getByRole('heading', { level: 1 })).toContainText(
+		'Publish to Brackenford Maltings Ltd'
+	);
+	await expect(page.getByTestId('publish-facts')).toContainText('Every finding is checked.');
+	await expect(page.getByTestId('publish-recipients')).toContainText(maltingsClientUser.email);
+	await expect(page.getByText('Not published yet.')).toBeVisible();
+	await page.screenshot({ path: `${shots}/publish-ready.png`, fullPage: true });
+
+	await page.getByRole('button', { name: 'Publish to the client' }).click();
+	await expect(
+		page.getByText(/Revision 1 is published\. 1 person was told by e-mail\./)
+	).toBeVisible();
+	const revision = page.locator('[data-revision="1"]');
+	await expect(revision).toContainText('what the client sees');
+	const [{ cost }] = await rows<{ cost: string }>(
+		db,
+		`SELECT JSON_VALUE(totals, '$.costMinor') AS cost FROM survey_revisions r
+		 JOIN surveys s ON s.id = r.survey_id WHERE r.survey_id = ? AND r.number = 1
+		 AND s.status = 'published' AND s.cost_basis_id = r.cost_basis_id`,
+		[brackenford]
+	);
+	expect(Number(cost)).toBeGreaterThan(0);
+
+	// The client's e-mail, its link, and the page behind it after signing in.
+	const mail = await waitForMail(maltingsClientUser.email, /report is ready: Brackenford/, since);
+	const link = linkIn(mail.message.text, '/ladder/surveys/');
+	expect(new URL(link).pathname).toBe(`/ladder/surveys/${brackenford}`);
+	const client = await browser.newContext();
+	const reader = await client.newPage();
+	await reader.goto(link);
+	await expect(reader).toHaveURL(/\/signin\?next=/);
+	expect(new URL(reader.url()).searchParams.get('next')).toBe(`/ladder/surveys/${brackenford}`);
+	await signInHere(
+		reader,
+		maltingsClientUser.email,
+		demoPassword,
+		`/ladder/surveys/${brackenford}`
+	);
+	await expect(reader.getByRole('heading', { level: 1 })).toContainText('Brackenford Maltings');
+	await expect(reader.getByTestId('ladder-revision')).toContainText('Published');
+	// Shown to three significant figures, as every money figure of the list.
+	const euros = new Intl.NumberFormat('en-US', {
+		style: 'currency',
+		currency: 'EUR',
+		maximumSignificantDigits: 3
+	}).format(Number(cost) / 100);
+	await expect(reader.getByTestId('ladder-totals')).toContainText(euros);
+	await expect(reader.getByRole('note', { name: 'Safety caution' })).toBeVisible();
+	await expect(reader.getByText(/not guarantees of savings/)).toBeVisible();
+	await reader.screenshot({ path: `${shots}/ladder-revision-1.png`, fullPage: true });
+
+	// A published survey's findings are frozen at the Desk.
+	const [first] = await rows<{ id: string }>(
+		db,
+		'SELECT id FROM findings WHERE survey_id = ? AND deleted_at IS NULL ORDER BY id LIMIT 1',
+		[brackenford]
+	);
+	await page.goto(`/desk/surveys/${brackenford}/findings/${first.id}`);
+	await page.getByRole('button', { name: 'Mark as not reviewed' }).click();
+	await expect(page.getByText(/its findings are frozen: nothing was changed/)).toBeVisible();
+
+	// A correction: revision 2 needs its note; the client keeps revision 1 until it goes.
+	await page.goto(publish);
+	await page.getByRole('button', { name: 'Open a correction (revision 2)' }).click();
+	await expect(page.getByText(/A correction is open: revision 2 is in progress/)).toBeVisible();
+	await reader.reload();
+	await expect(reader.getByTestId('ladder-revision')).toContainText('Published');
+	await page.getByRole('button', { name: 'Publish revision 2' }).click();
+	const note = page.getByLabel('What changed since revision 1');
+	await expect(note).toHaveAttribute('aria-invalid', 'true');
+	await expect(page.getByText(/Say what changed since the revision before/)).toBeVisible();
+	await note.fill('Kiln 2 trap repair costs updated from the contractor’s quote.');
+	await page.getByRole('button', { name: 'Publish revision 2' }).click();
+	await expect(page.getByText(/Revision 2 is published/)).toBeVisible();
+	await expect(page.locator('[data-revision="2"]')).toContainText('Kiln 2 trap repair costs');
+	await expect(page.locator('[data-revision="1"]')).toBeVisible();
+	const second = await waitForMail(
+		maltingsClientUser.email,
+		/Revision 2 of your steam survey/,
+		since
+	);
+	expect(second.message.text).toContain('What changed: Kiln 2 trap repair costs');
+	await reader.reload();
+	await expect(reader.getByTestId('ladder-revision')).toContainText('Revision 2, published');
+	await expect(reader.getByText('What changed in revision 2')).toBeVisible();
+	await client.close();
 });

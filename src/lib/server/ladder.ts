@@ -6,6 +6,8 @@ import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import { db } from './db';
 import { sites, surveys } from './db/schema';
 import { surveyScope } from './policy';
+import { ladderSurvey } from './publish/revisions';
+import { unitSystemOf } from './walk/person';
 
 /** Published surveys this person may see, newest publication first. */
 export function publishedSurveys(user: SessionUser) {
@@ -20,4 +22,16 @@ export function publishedSurveys(user: SessionUser) {
 		.innerJoin(sites, eq(sites.id, surveys.siteId))
 		.where(and(surveyScope(user), isNotNull(surveys.publishedAt)))
 		.orderBy(desc(surveys.publishedAt));
+}
+
+/**
+ * One survey as the Ladder shows it (the caller has checked read access): its last published
+ * revision's frozen figures, biggest saving first, in the reader's unit system.
+ */
+export async function ladderSurveyPage(user: SessionUser, surveyId: string, limit = 100) {
+	const [survey, unitSystem] = await Promise.all([
+		ladderSurvey(surveyId, limit),
+		unitSystemOf(db, user.id)
+	]);
+	return survey && { ...survey, unitSystem, limit };
 }

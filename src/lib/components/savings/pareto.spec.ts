@@ -20,6 +20,11 @@ describe('niceScale', () => {
 		expect(niceScale(7_340_000)).toEqual({ max: 8_000_000, step: 2_000_000 });
 		expect(niceScale(3)).toEqual({ max: 3, step: 1 });
 	});
+	it('never steps finer than the smallest step it is given (whole minor units of money)', () => {
+		expect(niceScale(0, 5, 1)).toEqual({ max: 5, step: 1 });
+		expect(niceScale(2, 5, 1)).toEqual({ max: 2, step: 1 });
+		expect(niceScale(7_340_000, 5, 1)).toEqual({ max: 8_000_000, step: 2_000_000 });
+	});
 	it('refuses a negative or non-finite maximum in words', () => {
 		expect(() => niceScale(-1)).toThrow(/maximum ≥ 0/);
 		expect(() => niceScale(Number.NaN)).toThrow(/maximum ≥ 0/);
@@ -27,6 +32,12 @@ describe('niceScale', () => {
 });
 
 describe('paretoGeometry', () => {
+	it('gives whole-minor-unit ticks when no repair is priced and savings are tiny', () => {
+		const g = paretoGeometry(ranked([{ saving: 3, repair: null }]));
+		for (const t of [...g.xTicks, ...g.yTicks]) expect(Number.isInteger(t.value)).toBe(true);
+		expect(g.xTicks.length).toBeGreaterThan(1);
+	});
+
 	const items = ranked([
 		{ saving: 600, repair: 100 },
 		{ saving: 300, repair: null },
@@ -74,19 +85,19 @@ describe('paretoGeometry', () => {
 		expect(g.path.startsWith(`M${plot.x0} ${plot.y0}`)).toBe(true);
 	});
 
-	it('draws nothing for an empty list, with axes of 0–1', () => {
+	it('draws nothing for an empty list, with axes of five whole minor units', () => {
 		const e = paretoGeometry([]);
 		expect(e.empty).toBe(true);
 		expect(e.points).toEqual([]);
 		expect(e.path).toBe('');
-		expect(e.xMax).toBe(1);
-		expect(e.yMax).toBe(1);
+		expect(e.xMax).toBe(5);
+		expect(e.yMax).toBe(5);
 		expect(e.frame).toEqual(DEFAULT_FRAME);
 	});
 
 	it('keeps x at zero when nothing is priced yet', () => {
 		const unpriced = paretoGeometry(ranked([{ saving: 50, repair: null }]));
-		expect(unpriced.xMax).toBe(1);
+		expect(unpriced.xMax).toBe(5);
 		expect(unpriced.points.every((p) => p.x === unpriced.plot.x0)).toBe(true);
 	});
 });

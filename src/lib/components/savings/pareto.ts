@@ -69,14 +69,17 @@ export const DEFAULT_FRAME: Frame = {
 
 /**
  * A round axis maximum at or above `max` and its step, so ticks fall on 1, 2, 2.5 or 5 × 10ⁿ:
- * about `count` steps. A maximum of zero (nothing saved, nothing priced) gives an axis of 0–1.
+ * about `count` steps, never finer than `minStep` (money axes count whole minor units). A
+ * maximum of zero (nothing saved, nothing priced) gives `count` steps of `minStep`, or 0–1.
  */
-export function niceScale(max: number, count = 5): { max: number; step: number } {
+export function niceScale(max: number, count = 5, minStep = 0): { max: number; step: number } {
 	if (!Number.isFinite(max) || max < 0) throw new Error(`An axis needs a maximum ≥ 0, got ${max}`);
-	if (max === 0) return { max: 1, step: 1 / count };
+	if (max === 0)
+		return minStep > 0 ? { max: count * minStep, step: minStep } : { max: 1, step: 1 / count };
 	const rough = max / count;
 	const power = 10 ** Math.floor(Math.log10(rough));
-	const step = [1, 2, 2.5, 5, 10].map((m) => m * power).find((s) => s >= rough) ?? 10 * power;
+	const nice = [1, 2, 2.5, 5, 10].map((m) => m * power).find((s) => s >= rough) ?? 10 * power;
+	const step = Math.max(nice, minStep);
 	return { max: Math.ceil(max / step - 1e-9) * step, step };
 }
 
@@ -104,8 +107,9 @@ export function paretoGeometry(
 		y1: frame.top
 	};
 	const last = items.at(-1);
-	const x = niceScale(last ? Math.max(0, last.cumulativeRepairCostMinor) : 0);
-	const y = niceScale(last ? Math.max(0, last.cumulativeSavingMinor) : 0);
+	// Both axes are money in minor units: a tick is never a fraction of a cent.
+	const x = niceScale(last ? Math.max(0, last.cumulativeRepairCostMinor) : 0, 5, 1);
+	const y = niceScale(last ? Math.max(0, last.cumulativeSavingMinor) : 0, 5, 1);
 	const px = (v: number) => round(plot.x0 + (v / x.max) * (plot.x1 - plot.x0));
 	const py = (v: number) => round(plot.y0 - (v / y.max) * (plot.y0 - plot.y1));
 	const points: ParetoPoint[] =

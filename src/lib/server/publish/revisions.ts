@@ -133,10 +133,15 @@ export interface PublishedFinding {
 	tag: string | null;
 	location: string;
 	area: string | null;
+	steamKgH: number | null;
+	heatKw: number | null;
+	fuelGjYear: number | null;
 	costMinor: number;
+	currency: string;
 	repairCostMinor: number | null;
 	paybackYears: number | null;
 	co2KgYear: number | null;
+	waterM3Year: number | null;
 }
 
 export interface LadderSurvey {
@@ -180,6 +185,10 @@ export async function ladderSurvey(
 			tag: S.tag,
 			location: S.location,
 			area: S.areaName,
+			steamKgH: S.steamLoss,
+			heatKw: S.heatLoss,
+			fuelGjYear: S.fuelEnergy,
+			waterM3Year: S.water,
 			costMinor: S.cost,
 			repairCostMinor: S.repairCost,
 			paybackYears: S.paybackYears,
@@ -199,7 +208,12 @@ export async function ladderSurvey(
 			tag: r.tag,
 			location: r.location ?? '',
 			area: r.area,
+			steamKgH: r.steamKgH,
+			heatKw: r.heatKw,
+			fuelGjYear: r.fuelGjYear,
+			waterM3Year: r.waterM3Year,
 			costMinor: Number(r.costMinor),
+			currency: latest.totals.currency,
 			repairCostMinor: r.repairCostMinor === null ? null : Number(r.repairCostMinor),
 			paybackYears: r.paybackYears,
 			co2KgYear: r.co2KgYear

@@ -25,6 +25,16 @@ export const maltingsClient = {
 	contactEmail: 'works.engineer@brackenford-maltings.example'
 };
 
+/** The maltings' works engineer, who gets the report-ready e-mail and reads the Ladder. */
+export const maltingsClientUser = {
+	id: uuid('0003', 21),
+	firmId: demoFirms[0].id,
+	email: 'works.engineer@brackenford-maltings.example',
+	name: 'Oona Haverkamp',
+	role: 'client' as const,
+	clientCompanyId: maltingsClient.id
+};
+
 export const maltingsHeaders = [
 	{
 		id: uuid('0005', 21),

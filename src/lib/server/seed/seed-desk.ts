@@ -14,9 +14,11 @@ import { pricingContext } from '../pricing/context';
 import { figureColumns } from '../pricing/figures';
 import { captureColumns } from '../walk/capture-row';
 import { captureOf, findingId } from './demo-finding';
-import { demoFirms, demoUsers } from './demo';
+import { hashPassword } from '../auth/password';
+import { demoFirms, demoPassword, demoUsers } from './demo';
 import { demoFindings } from './findings';
 import {
+	maltingsClientUser,
 	maltingsAreas,
 	maltingsClient,
 	maltingsCostBasis,
@@ -32,8 +34,12 @@ import {
 const keep = { set: { id: sql`id` } };
 
 export async function seedMaltings(db: Db): Promise<void> {
-	const { clientCompanies, sites, headers, areas, costBases, surveys, findings } = schema;
+	const { clientCompanies, sites, headers, areas, costBases, surveys, findings, users } = schema;
 	await db.insert(clientCompanies).values(maltingsClient).onDuplicateKeyUpdate(keep);
+	await db
+		.insert(users)
+		.values({ ...maltingsClientUser, passwordHash: await hashPassword(demoPassword) })
+		.onDuplicateKeyUpdate(keep);
 	await db.insert(sites).values(maltingsSite).onDuplicateKeyUpdate(keep);
 	await db
 		.insert(headers)
