@@ -35,7 +35,10 @@ start() {
 	local since
 	since=0; [ -f "$DB_LOG" ] && since=$(wc -c <"$DB_LOG")
 	# setsid + redirected output: the server must not hold the caller's terminal or pipes.
-	setsid mariadbd --no-defaults --datadir="$DB_DATADIR" --user="$SOCK_USER" \
+	# Its own temporary directory inside the project: a shared /tmp cleaned by someone else
+	# must not take the files of a sort or a window function away mid-query.
+	mkdir -p "$DATA_DIR/mariadb-tmp"
+	setsid mariadbd --no-defaults --datadir="$DB_DATADIR" --tmpdir="$DATA_DIR/mariadb-tmp" --user="$SOCK_USER" \
 		--bind-address=127.0.0.1 --port="$DB_PORT" --socket="$DB_SOCKET" --pid-file="$DB_PID" \
 		--log-error="$DB_LOG" --skip-name-resolve --innodb-buffer-pool-size="${STEAMWISP_DB_BUFFER_POOL:-512M}" \
 		--default-time-zone=+00:00 --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \

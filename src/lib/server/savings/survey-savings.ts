@@ -13,18 +13,39 @@ import { rankedSavings, type RankedSavings } from './ranked-savings';
 /** Items kept at most over every kept list (a list holds up to 5,000). */
 export const SAVINGS_CACHE_ITEMS = 50_000;
 
-const kept = viewCache<RankedSavings>({
+/** A kept list and its JSON, written once: a list of 5,000 items is megabytes of text. */
+interface Kept {
+	list: RankedSavings;
+	json: string;
+}
+
+const kept = viewCache<Kept>({
 	maxSize: SAVINGS_CACHE_ITEMS,
-	size: (list) => list.items.length + 1
+	size: (k) => k.list.items.length + 1
 });
+
+async function keptSavings(surveyId: string, rank: SavingsRank): Promise<Kept | null> {
+	const survey = await surveyPricing(db, surveyId);
+	if (!survey) return null;
+	const key = JSON.stringify([survey.id, survey.basisId, survey.revision, rank]);
+	return kept(key, async () => {
+		const list = await rankedSavings(db, survey, { rank });
+		return { list, json: JSON.stringify(list) };
+	});
+}
 
 /** The survey's ranked savings list; null when the survey is gone. */
 export async function surveySavings(
 	surveyId: string,
 	rank: SavingsRank
 ): Promise<RankedSavings | null> {
-	const survey = await surveyPricing(db, surveyId);
-	if (!survey) return null;
-	const key = JSON.stringify([survey.id, survey.basisId, survey.revision, rank]);
-	return kept(key, () => rankedSavings(db, survey, { rank }));
+	return (await keptSavings(surveyId, rank))?.list ?? null;
+}
+
+/** The same list as the API's JSON body (serialized once per kept list); null when gone. */
+export async function surveySavingsJson(
+	surveyId: string,
+	rank: SavingsRank
+): Promise<string | null> {
+	return (await keptSavings(surveyId, rank))?.json ?? null;
 }

@@ -1,8 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { readSavingsQuery } from '$lib/schemas/savings';
 import { requireRole, requireSurveyAccess } from '$lib/server/policy';
-import { surveySavings } from '$lib/server/savings/survey-savings';
-import { privateJson } from '$lib/server/walk/respond';
+import { surveySavingsJson } from '$lib/server/savings/survey-savings';
 import type { RequestHandler } from './$types';
 
 /**
@@ -16,7 +15,9 @@ export const GET: RequestHandler = async (event) => {
 	const survey = await requireSurveyAccess(user, event.params.id, 'read');
 	const read = readSavingsQuery(event.url.searchParams);
 	if (!read.ok) error(400, read.message);
-	const list = await surveySavings(survey.id, read.query.rank);
-	if (!list) error(404, 'Not found.');
-	return privateJson(list);
+	const body = await surveySavingsJson(survey.id, read.query.rank);
+	if (body === null) error(404, 'Not found.');
+	return new Response(body, {
+		headers: { 'content-type': 'application/json', 'cache-control': 'private, no-store' }
+	});
 };
