@@ -1,0 +1,228 @@
+/**
+ * A report's ranked rows, paged from SQL by keyset (annual saving biggest first, ties by id —
+ * the savings list's `savings` order), so a survey of 100,000 findings is read a page at a
+ * time and a page's connection goes back to the pool before the next is asked for: an export
+ * holds one page in memory, never the survey. The running sums are added up as the rows pass
+ * (the order is total, so they equal the savings list's window sums).
+ *
+ * Live figures come from `findings` (the savings list's rule: live, current, saving); a
+ * revision's from its frozen snapshot `survey_revision_findings`.
+ */
+import { and, asc, desc, eq, gt, lt, or, sql, type AnyColumn } from 'drizzle-orm';
+import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
+import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
+import type { Executor } from '../db/types';
+import { conditionWords, kindWords, statusWords } from '../finding-words';
+import type { SavingsItem } from '../savings/ranked-list';
+import { savingFindingSql } from '../savings/ranked-list';
+import type { SavingsBreakdown, SavingsGroup } from '../savings/totals';
+import type { ReportContent } from './content';
+
+/** One ranked row of a report: the savings list's item, and the version it was published at. */
+export interface ReportRow extends SavingsItem {
+	/** The finding's version in the revision's snapshot; null for live figures. */
+	publishedVersion: number | null;
+}
+
+/** Rows read per statement. */
+export const REPORT_PAGE_ROWS = 2_000;
+
+type Raw = {
+	id: string;
+	kind: string;
+	tag: string | null;
+	location: string | null;
+	area: string | null;
+	header: string | null;
+	condition: string | null;
+	status: string;
+	steamKgH: number | null;
+	heatKw: number | null;
+	fuelGjYear: number | null;
+	costMinor: number | null;
+	co2KgYear: number | null;
+	waterM3Year: number | null;
+	repairCostMinor: number | null;
+	paybackYears: number | null;
+	publishedVersion: number | null;
+};
+
+/** After (cost, id) in the order cost DESC, id ASC. */
+const after = (cost: AnyColumn, id: AnyColumn, last: Raw | null) =>
+	last === null
+		? undefined
+		: or(lt(cost, last.costMinor), and(eq(cost, last.costMinor), gt(id, last.id)));
+
+function livePage(db: Executor, content: ReportContent, last: Raw | null, size: number) {
+	return db
+		.select({
+			id: F.id,
+			kind: F.kind,
+			tag: assets.tag,
+			location: F.location,
+			area: areas.name,
+			header: headers.name,
+			condition: F.condition,
+			status: F.status,
+			steamKgH: F.steamLoss,
+			heatKw: F.heatLoss,
+			fuelGjYear: F.fuelEnergy,
+			costMinor: F.cost,
+			co2KgYear: F.co2,
+			waterM3Year: F.water,
+			repairCostMinor: F.repairCost,
+			paybackYears: F.paybackYears,
+			publishedVersion: sql<number | null>`NULL`
+		})
+		.from(F)
+		.leftJoin(assets, eq(assets.id, F.assetId))
+		.leftJoin(areas, eq(areas.id, F.areaId))
+		.leftJoin(headers, eq(headers.id, F.headerId))
+		.where(and(savingFindingSql(content.survey.id, content.basisId), after(F.cost, F.id, last)))
+		.orderBy(desc(F.cost), asc(F.id))
+		.limit(size);
+}
+
+/** The snapshot's rows the savings list would have listed: current on its basis, saving. */
+const savingSnapshotSql = (revisionId: string) =>
+	and(eq(S.revisionId, revisionId), eq(S.figuresCurrent, 1), gt(S.cost, 0))!;
+
+function revisionPage(db: Executor, revisionId: string, last: Raw | null, size: number) {
+	return db
+		.select({
+			id: S.findingId,
+			kind: S.kind,
+			tag: S.tag,
+			location: S.location,
+			area: S.areaName,
+			header: S.headerName,
+			condition: S.condition,
+			status: S.status,
+			steamKgH: S.steamLoss,
+			heatKw: S.heatLoss,
+			fuelGjYear: S.fuelEnergy,
+			costMinor: S.cost,
+			co2KgYear: S.co2,
+			waterM3Year: S.water,
+			repairCostMinor: S.repairCost,
+			paybackYears: S.paybackYears,
+			publishedVersion: S.findingVersion
+		})
+		.from(S)
+		.where(and(savingSnapshotSql(revisionId), after(S.cost, S.findingId, last)))
+		.orderBy(desc(S.cost), asc(S.findingId))
+		.limit(size);
+}
+
+/**
+ * The report's rows in rank order, `limit` at most (all by default), a page per statement.
+ * Stops reading when the consumer stops (an export whose download was cancelled).
+ */
+export async function* reportRows(
+	db: Executor,
+	content: ReportContent,
+	{ limit = Infinity, pageRows = REPORT_PAGE_ROWS }: { limit?: number; pageRows?: number } = {}
+): AsyncGenerator<ReportRow> {
+	let last: Raw | null = null;
+	let rank = 0;
+	let saving = 0;
+	let repair = 0;
+	while (rank < limit) {
+		const size = Math.min(pageRows, limit - rank);
+		const page: Raw[] = content.revision
+			? await revisionPage(db, content.revision.id, last, size)
+			: await livePage(db, content, last, size);
+		for (const r of page) {
+			rank += 1;
+			const costMinor = Number(r.costMinor);
+			const repairCostMinor = r.repairCostMinor === null ? null : Number(r.repairCostMinor);
+			saving += costMinor;
+			repair += repairCostMinor ?? 0;
+			yield {
+				rank,
+				id: r.id,
+				kind: r.kind as FindingKind,
+				kindWords: kindWords(r.kind),
+				tag: r.tag,
+				location: r.location ?? '',
+				area: r.area,
+				header: r.header,
+				condition: r.condition,
+				conditionWords: conditionWords(r.condition),
+				status: r.status as FindingStatus,
+				statusWords: statusWords(r.status),
+				steamKgH: r.steamKgH,
+				heatKw: r.heatKw,
+				fuelGjYear: r.fuelGjYear,
+				costMinor,
+				currency: content.currency,
+				co2KgYear: r.co2KgYear,
+				waterM3Year: r.waterM3Year,
+				repairCostMinor,
+				paybackYears: r.paybackYears,
+				cumulativeSavingMinor: saving,
+				cumulativeRepairCostMinor: repair,
+				publishedVersion: r.publishedVersion === null ? null : Number(r.publishedVersion)
+			};
+		}
+		if (page.length < size) return;
+		last = page[page.length - 1];
+	}
+}
+
+const num = (v: string | number | null | undefined) => Number(v ?? 0);
+const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
+	b.costMinor - a.costMinor || a.label.localeCompare(b.label);
+
+/** The breakdown by kind and area of a revision's snapshot (as savingsTotals groups live ones). */
+export async function revisionBreakdown(
+	db: Executor,
+	revisionId: string
+): Promise<SavingsBreakdown> {
+	const groups = await db
+		.select({
+			kind: S.kind,
+			areaId: S.areaId,
+			area: S.areaName,
+			count: sql<string | number>`COUNT(*)`,
+			cost: sql<string | number | null>`SUM(${S.cost})`,
+			repair: sql<string | number | null>`SUM(${S.repairCost})`,
+			co2: sql<string | number | null>`SUM(${S.co2})`
+		})
+		.from(S)
+		.where(savingSnapshotSql(revisionId))
+		.groupBy(S.kind, S.areaId, S.areaName);
+	const fold = (
+		key: (g: (typeof groups)[number]) => string | null,
+		label: (g: (typeof groups)[number]) => string
+	) => {
+		const map = new Map<string | null, SavingsGroup>();
+		for (const g of groups) {
+			const k = key(g);
+			const group = map.get(k) ?? {
+				key: k,
+				label: label(g),
+				count: 0,
+				costMinor: 0,
+				repairCostMinor: 0,
+				co2KgYear: 0
+			};
+			group.count += num(g.count);
+			group.costMinor += num(g.cost);
+			group.repairCostMinor += num(g.repair);
+			group.co2KgYear += num(g.co2);
+			map.set(k, group);
+		}
+		return [...map.values()].sort(bySaving);
+	};
+	return {
+		kind: fold(
+			(g) => g.kind,
+			(g) => kindWords(g.kind)
+		),
+		area: fold(
+			(g) => g.areaId,
+			(g) => g.area ?? 'No area'
+		)
+	};
+}
