@@ -36,7 +36,12 @@ export function summaryLines(content: ReportContent): SummaryLine[] {
 			label,
 			value: cellValue(figures, column, system),
 			unit,
-			text: `${cellText(figures, column, system)} ${unit}`
+			text:
+				column === 'cost'
+					? `${moneyText(t.costMinor, currency)} per year`
+					: column === 'repair'
+						? moneyText(t.repairCostMinor, currency)
+						: `${cellText(figures, column, system)} ${unit}`
 		};
 	});
 	const count = (label: string, n: number): SummaryLine => ({

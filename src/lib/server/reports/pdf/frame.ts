@@ -88,7 +88,7 @@ function footer(doc: Doc, left: string, page: number) {
 		.strokeColor(COLOUR.rule)
 		.stroke();
 	doc.font(FONT.regular).fontSize(8).fillColor(COLOUR.muted);
-	doc.text(left, PAGE.margin, top, { width: CONTENT_WIDTH - 70, lineBreak: false, ellipsis: true });
+	oneLine(doc, left, PAGE.margin, top, CONTENT_WIDTH - 80);
 	doc.text(`Page ${page}`, PAGE.width - PAGE.margin - 70, top, {
 		width: 70,
 		align: 'right',
@@ -152,30 +152,32 @@ export function paragraph(
 export function pairs(
 	doc: Doc,
 	rows: readonly { label: string; value: string }[],
-	labelWidth = 200
+	labelWidth = 200,
+	size = 9.5
 ) {
 	const valueWidth = CONTENT_WIDTH - labelWidth - 8;
+	const pad = size < 9 ? 2 : 3;
 	for (const r of rows) {
-		doc.font(FONT.regular).fontSize(9.5);
+		doc.font(FONT.regular).fontSize(size);
 		const h = Math.max(
 			doc.heightOfString(r.label, { width: labelWidth }),
 			doc.heightOfString(r.value, { width: valueWidth })
 		);
-		keep(doc, h + 6);
+		keep(doc, h + 2 * pad);
 		const y = doc.y;
 		doc.fillColor(COLOUR.muted).text(r.label, PAGE.margin, y, { width: labelWidth });
 		doc
 			.font(FONT.bold)
 			.fillColor(COLOUR.ink)
 			.text(r.value, PAGE.margin + labelWidth + 8, y, { width: valueWidth });
-		const bottom = y + h + 3;
+		const bottom = y + h + pad;
 		doc
 			.moveTo(PAGE.margin, bottom)
 			.lineTo(PAGE.width - PAGE.margin, bottom)
 			.lineWidth(0.4)
 			.strokeColor(COLOUR.rule)
 			.stroke();
-		doc.y = bottom + 3;
+		doc.y = bottom + pad;
 	}
 	doc.x = PAGE.margin;
 	doc.font(FONT.regular);
@@ -220,4 +222,29 @@ export function notice(
 	doc.x = PAGE.margin;
 	doc.y = top + h + 10;
 	doc.fillColor(COLOUR.ink);
+}
+
+/** `text` cut with "…" to fit `width` at the current font and size. */
+export function fitText(doc: Doc, text: string, width: number): string {
+	if (doc.widthOfString(text) <= width) return text;
+	let lo = 0;
+	let hi = text.length;
+	while (lo < hi) {
+		const mid = Math.ceil((lo + hi) / 2);
+		if (doc.widthOfString(`${text.slice(0, mid).trimEnd()}…`) <= width) lo = mid;
+		else hi = mid - 1;
+	}
+	return `${text.slice(0, lo).trimEnd()}…`;
+}
+
+/** One line of text at (x, y), never wrapped: cut with "…" when it does not fit. */
+export function oneLine(
+	doc: Doc,
+	text: string,
+	x: number,
+	y: number,
+	width: number,
+	align: 'left' | 'right' | 'center' = 'left'
+) {
+	doc.text(fitText(doc, text, width), x, y, { width, align, lineBreak: false });
 }
