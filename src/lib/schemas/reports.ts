@@ -4,6 +4,7 @@
  * a published revision to report instead of the one the reader gets by default.
  */
 import { z } from 'zod';
+import { readQueryString } from './query-string';
 
 export const reportQuerySchema = z.strictObject(
 	{
@@ -25,16 +26,4 @@ export const reportQuerySchema = z.strictObject(
 export type ReportQuery = z.output<typeof reportQuerySchema>;
 
 /** The query string as the schema reads it; a parameter given twice is refused. */
-export function readReportQuery(
-	params: URLSearchParams
-): { ok: true; query: ReportQuery } | { ok: false; message: string } {
-	const raw: Record<string, string> = {};
-	for (const name of new Set(params.keys())) {
-		const values = params.getAll(name);
-		if (values.length > 1) return { ok: false, message: `Give ${name} only once.` };
-		raw[name] = values[0];
-	}
-	const parsed = reportQuerySchema.safeParse(raw);
-	if (parsed.success) return { ok: true, query: parsed.data };
-	return { ok: false, message: parsed.error.issues[0]?.message ?? 'Check the query.' };
-}
+export const readReportQuery = (params: URLSearchParams) => readQueryString(params, reportQuerySchema);

@@ -25,7 +25,7 @@ export interface ReportRow extends SavingsItem {
 }
 
 /** Rows read per statement. */
-export const REPORT_PAGE_ROWS = 2_000;
+export const REPORT_PAGE_ROWS = 10_000;
 
 type Raw = {
 	id: string;

@@ -156,7 +156,7 @@ export function breakdownBars(
 		.text(title, PAGE.margin, doc.y, { width: CONTENT_WIDTH });
 	doc.moveDown(0.3);
 	const labelW = 130;
-	const valueW = 150;
+	const valueW = 160;
 	const barLeft = PAGE.margin + labelW + 6;
 	const barW = CONTENT_WIDTH - labelW - valueW - 12;
 	const max = Math.max(1, ...rows.map((g) => g.costMinor));
@@ -170,7 +170,7 @@ export function breakdownBars(
 			.fill(g.key === 'rest' ? COLOUR.line : COLOUR.wisp);
 		doc.font(FONT.regular).fontSize(8.5).fillColor(COLOUR.ink);
 		doc.text(
-			`${moneyText(g.costMinor, currency)}/yr · ${g.count.toLocaleString('en-US')}`,
+			`${moneyText(g.costMinor, currency)}/yr · ${g.count.toLocaleString('en-US')} ${g.count === 1 ? 'finding' : 'findings'}`,
 			barLeft + barW + 6,
 			y + 3,
 			{

@@ -63,7 +63,7 @@ function photos(doc: Doc, s: FindingSection) {
 	const per = s.photos.length === 1 ? 1 : 2;
 	const gap = 10;
 	const w = (CONTENT_WIDTH - gap * (per - 1)) / per;
-	const h = per === 1 ? 220 : 150;
+	const h = per === 1 ? 190 : 140;
 	for (let i = 0; i < s.photos.length; i += per) {
 		keep(doc, h + 28);
 		const top = doc.y;
@@ -139,6 +139,13 @@ export function findingPage(doc: Doc, s: FindingSection, system: UnitSystemId, c
 			{ rule: COLOUR.copper, band: COLOUR.canvas, title: COLOUR.copper }
 		);
 	}
+	notice(
+		doc,
+		'Caution: live steam, pressure and hot surfaces',
+		s.cautions.length > 0
+			? s.cautions.map((c) => c.text)
+			: ['Defer to local codes, the site’s rules and licensed practice.']
+	);
 	figureTiles(doc, s, system, currency);
 	photos(doc, s);
 	if (s.notes.trim()) {
@@ -188,8 +195,4 @@ export function findingPage(doc: Doc, s: FindingSection, system: UnitSystemId, c
 			colour: COLOUR.muted
 		});
 	}
-	notice(doc, 'Caution: live steam, pressure and hot surfaces', [
-		...s.cautions.map((c) => c.text),
-		'Never repair under pressure: isolate, drain and vent first, under the site’s permit-to-work. Local codes and licensed practice come first.'
-	]);
 }

@@ -21,6 +21,7 @@ import {
 	FONT,
 	PAGE,
 	heading,
+	keep,
 	newDocument,
 	notice,
 	pairs,
@@ -183,13 +184,13 @@ async function summary(doc: Doc, c: ReportContent, src: ReportSources) {
 	heading(doc, 'Where the saving is');
 	breakdownBars(
 		doc,
-		`By kind of finding: annual saving (${c.currency}/yr) · findings`,
+		`By kind of finding: annual saving (${c.currency}/yr) and findings`,
 		c.breakdown.kind,
 		c.currency
 	);
 	breakdownBars(
 		doc,
-		`By area: annual saving (${c.currency}/yr) · findings`,
+		`By area: annual saving (${c.currency}/yr) and findings`,
 		c.breakdown.area,
 		c.currency
 	);
@@ -230,7 +231,8 @@ export async function renderReportPdf(
 	doc.pipe(out);
 	cover(doc, c);
 	await summary(doc, c, src);
-	doc.addPage();
+	doc.moveDown(1);
+	keep(doc, 140);
 	heading(doc, 'Findings ranked by annual saving');
 	if (c.totals.count > src.tableRows) {
 		paragraph(
