@@ -16,6 +16,8 @@ import { moneyText } from '../../src/lib/components/savings/money';
 import * as schema from '../../src/lib/server/db/schema';
 import { surveyPricing } from '../../src/lib/server/desk/findings-query';
 import { openCorrection, publishSurvey } from '../../src/lib/server/publish/publish';
+import { reportContent } from '../../src/lib/server/reports/content';
+import { reportRows } from '../../src/lib/server/reports/rows';
 import { rankedSavings } from '../../src/lib/server/savings/ranked-savings';
 import { demoFirms } from '../../src/lib/server/seed/demo';
 import { touchFirm } from '../../src/lib/server/sync/counter';
@@ -258,6 +260,29 @@ describe('a draft survey, as the consultant reports it', () => {
 		expect(water).toBeCloseTo(list.totals.waterM3Year, 3);
 	});
 
+	it('pages of any size give the savings list’s order and running sums, ties by id', async () => {
+		const list = await liveList();
+		const content = await reportContent(db, survey, 'staff');
+		expect(content?.ok).toBe(true);
+		if (!content?.ok) return;
+		// The mix repeats its costs, so small pages end inside runs of equal cost.
+		expect(new Set(list.items.map((i) => i.costMinor)).size).toBeLessThan(list.items.length);
+		for (const pageRows of [1, 2, 7, 1000]) {
+			const rows = [];
+			for await (const r of reportRows(db, content.content, { pageRows })) rows.push(r);
+			expect(
+				rows.map((r) => [r.rank, r.id, r.cumulativeSavingMinor, r.cumulativeRepairCostMinor]),
+				`pages of ${pageRows}`
+			).toEqual(
+				list.items.map((i) => [i.rank, i.id, i.cumulativeSavingMinor, i.cumulativeRepairCostMinor])
+			);
+		}
+		const first = [];
+		for await (const r of reportRows(db, content.content, { limit: 5, pageRows: 2 }))
+			first.push(r.id);
+		expect(first).toEqual(list.items.slice(0, 5).map((i) => i.id));
+	});
+
 	it('the XLSX read back with exceljs: the same rows and totals, units in the headers', async () => {
 		const list = await liveList();
 		const { head, rows, book, res } = await xlsxSheet(consultantA);
@@ -332,6 +357,12 @@ describe('published, then corrected: the client keeps the frozen revision', () =
 		expect(live.totals.costMinor).not.toBe(published.totals.costMinor);
 		const { col } = await csvTable(clientA);
 		expect(sumMinor(col('Cost (EUR/yr)'))).toBe(published.totals.costMinor);
+		// The snapshot paged small, as the live list is above.
+		const frozen = await reportContent(db, survey, 'client');
+		if (!frozen?.ok) throw new Error('no revision');
+		const ids = [];
+		for await (const r of reportRows(db, frozen.content, { pageRows: 3 })) ids.push(r.id);
+		expect(ids).toEqual(published.items.map((i) => i.id));
 		expect(col('Finding')).toEqual(published.items.map((i) => i.id));
 		const { head, rows } = await xlsxSheet(clientA);
 		expect(sumMinor(rows.map((r) => r[head.indexOf('Cost (EUR/yr)')] as number))).toBe(

@@ -47,13 +47,25 @@ type Raw = {
 	publishedVersion: number | null;
 };
 
-/** After (cost, id) in the order cost DESC, id ASC. */
-const after = (cost: AnyColumn, id: AnyColumn, last: Raw | null) =>
-	last === null
-		? undefined
-		: or(lt(cost, last.costMinor), and(eq(cost, last.costMinor), gt(id, last.id)));
+/**
+ * Where a page starts. The ranking is cost DESC, id ASC, but an index on (survey, cost) read
+ * backwards gives equal costs in id DESC, and sorting the rest of the survey for every page
+ * reads every remaining row each time (seconds a page at 100,000 findings). So a page is read
+ * in index order only: `below` a cost, biggest first — its lowest cost's rows may go on past the
+ * page, so those are left for a `tie` page, that cost's rows in id order after `after`.
+ */
+type Cursor = { kind: 'below'; cost: number | null } | { kind: 'tie'; cost: number; after: string };
 
-function livePage(db: Executor, content: ReportContent, last: Raw | null, size: number) {
+const where = (cost: AnyColumn, id: AnyColumn, c: Cursor) =>
+	c.kind === 'below'
+		? c.cost === null
+			? undefined
+			: lt(cost, c.cost)
+		: and(eq(cost, c.cost), gt(id, c.after));
+const order = (cost: AnyColumn, id: AnyColumn, c: Cursor) =>
+	c.kind === 'below' ? [desc(cost)] : [asc(id)];
+
+function livePage(db: Executor, content: ReportContent, c: Cursor, size: number) {
 	return db
 		.select({
 			id: F.id,
@@ -78,8 +90,8 @@ function livePage(db: Executor, content: ReportContent, last: Raw | null, size: 
 		.leftJoin(assets, eq(assets.id, F.assetId))
 		.leftJoin(areas, eq(areas.id, F.areaId))
 		.leftJoin(headers, eq(headers.id, F.headerId))
-		.where(and(savingFindingSql(content.survey.id, content.basisId), after(F.cost, F.id, last)))
-		.orderBy(desc(F.cost), asc(F.id))
+		.where(and(savingFindingSql(content.survey.id, content.basisId), where(F.cost, F.id, c)))
+		.orderBy(...order(F.cost, F.id, c))
 		.limit(size);
 }
 
@@ -87,7 +99,7 @@ function livePage(db: Executor, content: ReportContent, last: Raw | null, size: 
 const savingSnapshotSql = (revisionId: string) =>
 	and(eq(S.revisionId, revisionId), eq(S.figuresCurrent, 1), gt(S.cost, 0))!;
 
-function revisionPage(db: Executor, revisionId: string, last: Raw | null, size: number) {
+function revisionPage(db: Executor, revisionId: string, c: Cursor, size: number) {
 	return db
 		.select({
 			id: S.findingId,
@@ -109,8 +121,8 @@ function revisionPage(db: Executor, revisionId: string, last: Raw | null, size: 
 			publishedVersion: S.findingVersion
 		})
 		.from(S)
-		.where(and(savingSnapshotSql(revisionId), after(S.cost, S.findingId, last)))
-		.orderBy(desc(S.cost), asc(S.findingId))
+		.where(and(savingSnapshotSql(revisionId), where(S.cost, S.findingId, c)))
+		.orderBy(...order(S.cost, S.findingId, c))
 		.limit(size);
 }
 
@@ -123,52 +135,71 @@ export async function* reportRows(
 	content: ReportContent,
 	{ limit = Infinity, pageRows = REPORT_PAGE_ROWS }: { limit?: number; pageRows?: number } = {}
 ): AsyncGenerator<ReportRow> {
-	let last: Raw | null = null;
 	let rank = 0;
 	let saving = 0;
 	let repair = 0;
+	const row = (r: Raw): ReportRow => {
+		rank += 1;
+		const costMinor = Number(r.costMinor);
+		const repairCostMinor = r.repairCostMinor === null ? null : Number(r.repairCostMinor);
+		saving += costMinor;
+		repair += repairCostMinor ?? 0;
+		return {
+			rank,
+			id: r.id,
+			kind: r.kind as FindingKind,
+			kindWords: kindWords(r.kind),
+			tag: r.tag,
+			location: r.location ?? '',
+			area: r.area,
+			header: r.header,
+			condition: r.condition,
+			conditionWords: conditionWords(r.condition),
+			status: r.status as FindingStatus,
+			statusWords: statusWords(r.status),
+			steamKgH: r.steamKgH,
+			heatKw: r.heatKw,
+			fuelGjYear: r.fuelGjYear,
+			costMinor,
+			currency: content.currency,
+			co2KgYear: r.co2KgYear,
+			waterM3Year: r.waterM3Year,
+			repairCostMinor,
+			paybackYears: r.paybackYears,
+			cumulativeSavingMinor: saving,
+			cumulativeRepairCostMinor: repair,
+			publishedVersion: r.publishedVersion === null ? null : Number(r.publishedVersion)
+		};
+	};
+	let cursor: Cursor = { kind: 'below', cost: null };
 	while (rank < limit) {
 		const size = Math.min(pageRows, limit - rank);
 		const page: Raw[] = content.revision
-			? await revisionPage(db, content.revision.id, last, size)
-			: await livePage(db, content, last, size);
-		for (const r of page) {
-			rank += 1;
-			const costMinor = Number(r.costMinor);
-			const repairCostMinor = r.repairCostMinor === null ? null : Number(r.repairCostMinor);
-			saving += costMinor;
-			repair += repairCostMinor ?? 0;
-			yield {
-				rank,
-				id: r.id,
-				kind: r.kind as FindingKind,
-				kindWords: kindWords(r.kind),
-				tag: r.tag,
-				location: r.location ?? '',
-				area: r.area,
-				header: r.header,
-				condition: r.condition,
-				conditionWords: conditionWords(r.condition),
-				status: r.status as FindingStatus,
-				statusWords: statusWords(r.status),
-				steamKgH: r.steamKgH,
-				heatKw: r.heatKw,
-				fuelGjYear: r.fuelGjYear,
-				costMinor,
-				currency: content.currency,
-				co2KgYear: r.co2KgYear,
-				waterM3Year: r.waterM3Year,
-				repairCostMinor,
-				paybackYears: r.paybackYears,
-				cumulativeSavingMinor: saving,
-				cumulativeRepairCostMinor: repair,
-				publishedVersion: r.publishedVersion === null ? null : Number(r.publishedVersion)
-			};
+			? await revisionPage(db, content.revision.id, cursor, size)
+			: await livePage(db, content, cursor, size);
+		if (cursor.kind === 'tie') {
+			for (const r of page) yield row(r);
+			cursor =
+				page.length < size
+					? { kind: 'below', cost: cursor.cost }
+					: { kind: 'tie', cost: cursor.cost, after: page[page.length - 1].id };
+			continue;
 		}
-		if (page.length < size) return;
-		last = page[page.length - 1];
+		page.sort(ranked);
+		if (page.length < size) {
+			for (const r of page) if (rank < limit) yield row(r);
+			return;
+		}
+		// The lowest cost on the page may have more rows past it: those come in id order next.
+		const lowest = Number(page[page.length - 1].costMinor);
+		for (const r of page) if (Number(r.costMinor) > lowest) yield row(r);
+		cursor = { kind: 'tie', cost: lowest, after: '' };
 	}
 }
+
+/** The ranking's order: cost DESC, then id ASC (ids are lower-case ASCII, so code-unit order). */
+const ranked = (a: Raw, b: Raw) =>
+	Number(b.costMinor) - Number(a.costMinor) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 
 const num = (v: string | number | null | undefined) => Number(v ?? 0);
 const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
