@@ -174,19 +174,27 @@ function parseCsv(text: string): string[][] {
 	let quoted = false;
 	for (let i = 0; i < text.length; i++) {
 		const c = text[i];
-		if (quoted) {
-			if (c === '"' && text[i + 1] === '"') ((field += '"'), i++);
-			else if (c === '"') quoted = false;
-			else field += c;
-		} else if (c === '"') quoted = true;
-		else if (c === ',') (row.push(field), (field = ''));
-		else if (c === '\r' && text[i + 1] === '\n') {
+		if (quoted && c === '"' && text[i + 1] === '"') {
+			field += '"';
+			i++;
+		} else if (c === '"') {
+			quoted = !quoted;
+		} else if (quoted) {
+			field += c;
+		} else if (c === ',') {
+			row.push(field);
+			field = '';
+		} else if (c === '\r' && text[i + 1] === '\n') {
 			row.push(field);
 			rows.push(row);
-			((row = []), (field = ''), i++);
-		} else field += c;
+			row = [];
+			field = '';
+			i++;
+		} else {
+			field += c;
+		}
 	}
-	if (field || row.length) (row.push(field), rows.push(row));
+	if (field || row.length) rows.push([...row, field]);
 	return rows;
 }
 

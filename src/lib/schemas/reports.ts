@@ -26,4 +26,5 @@ export const reportQuerySchema = z.strictObject(
 export type ReportQuery = z.output<typeof reportQuerySchema>;
 
 /** The query string as the schema reads it; a parameter given twice is refused. */
-export const readReportQuery = (params: URLSearchParams) => readQueryString(params, reportQuerySchema);
+export const readReportQuery = (params: URLSearchParams) =>
+	readQueryString(params, reportQuerySchema);

@@ -34,4 +34,5 @@ export const savingsQuerySchema = z.strictObject(
 export type SavingsQuery = z.output<typeof savingsQuerySchema>;
 
 /** The query string as the schema reads it; a parameter given twice is refused. */
-export const readSavingsQuery = (params: URLSearchParams) => readQueryString(params, savingsQuerySchema);
+export const readSavingsQuery = (params: URLSearchParams) =>
+	readQueryString(params, savingsQuerySchema);

@@ -13,6 +13,7 @@ import { exportColumns, type ExportColumn } from './columns';
 import type { ReportContent } from './content';
 import { CSV_BOM, csvNumber, csvRecord } from './csv';
 import { reportRows, type ReportRow } from './rows';
+import { pace } from './streams';
 import { summaryLines } from './summary';
 
 const valueOf = (c: ExportColumn, row: ReportRow, digits: number) => {
@@ -88,8 +89,10 @@ export async function writeFindingsXlsx(
 	const head = sheet.getRow(1);
 	head.font = { bold: true };
 	head.commit();
+	let n = 0;
 	for await (const row of reportRows(db, content)) {
 		sheet.addRow(columns.map((c) => c.value(row))).commit();
+		if (++n % 1000 === 0) await pace(out);
 	}
 	sheet.commit();
 	await book.commit();

@@ -8,7 +8,7 @@
  * Live figures come from `findings` (the savings list's rule: live, current, saving); a
  * revision's from its frozen snapshot `survey_revision_findings`.
  */
-import { and, asc, desc, eq, gt, lt, or, sql, type AnyColumn } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, lt, sql, type AnyColumn } from 'drizzle-orm';
 import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
 import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
 import type { Executor } from '../db/types';

@@ -3,7 +3,7 @@
  * so a slow or cancelled download stops the reading of rows (nothing runs ahead of the
  * reader), and a Node stream (pdfkit, exceljs) turned into one.
  */
-import { PassThrough, Readable } from 'node:stream';
+import { PassThrough, Readable, type Writable } from 'node:stream';
 
 const encoder = new TextEncoder();
 
@@ -39,4 +39,24 @@ export function nodeBody(write: (out: PassThrough) => Promise<void>): ReadableSt
 	const out = new PassThrough({ highWaterMark: 256 * 1024 });
 	write(out).catch((e: unknown) => out.destroy(e instanceof Error ? e : new Error(String(e))));
 	return Readable.toWeb(out) as unknown as ReadableStream<Uint8Array>;
+}
+
+/**
+ * Waits while the download is behind (its buffer full), so a writer that cannot wait by
+ * itself — pdfkit, exceljs — runs no further ahead of the reader than one page or a few rows;
+ * throws when the download was cancelled, which ends the writing.
+ */
+export async function pace(out: Writable): Promise<void> {
+	while (!out.destroyed && out.writableNeedDrain) {
+		await new Promise<void>((resolve) => {
+			const done = () => {
+				out.off('drain', done);
+				out.off('close', done);
+				resolve();
+			};
+			out.once('drain', done);
+			out.once('close', done);
+		});
+	}
+	if (out.destroyed) throw new Error('The download was cancelled.');
 }

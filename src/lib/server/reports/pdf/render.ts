@@ -12,6 +12,7 @@ import { choiceWords } from '../choose';
 import type { ReportContent } from '../content';
 import type { FindingSection } from '../finding-sections';
 import type { ReportRow } from '../rows';
+import { pace } from '../streams';
 import { summaryLines } from '../summary';
 import { breakdownBars, paretoChart, paretoWords, type ParetoPoint } from './charts';
 import { findingPage } from './finding-page';
@@ -241,7 +242,7 @@ export async function renderReportPdf(
 			{ size: 9, colour: COLOUR.muted }
 		);
 	}
-	await rankedTable(doc, src.rows(), s.unitSystem, c.currency, c.totals);
+	await rankedTable(doc, src.rows(), s.unitSystem, c.currency, c.totals, () => pace(out));
 	if (c.totals.count > 0) {
 		paragraph(
 			doc,
@@ -251,7 +252,10 @@ export async function renderReportPdf(
 			{ size: 9, colour: COLOUR.muted }
 		);
 	}
-	for await (const section of src.findings()) findingPage(doc, section, s.unitSystem, c.currency);
+	for await (const section of src.findings()) {
+		await pace(out);
+		findingPage(doc, section, s.unitSystem, c.currency);
+	}
 	safety(doc);
 	doc.end();
 	await done;

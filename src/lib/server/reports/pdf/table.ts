@@ -102,13 +102,16 @@ export async function rankedTable(
 	rows: AsyncIterable<ReportRow>,
 	system: UnitSystemId,
 	currency: string,
-	totals: Figures
+	totals: Figures,
+	/** Awaited every page: the download's pace. */
+	paced: () => Promise<void>
 ): Promise<number> {
 	const cols = columns(system, currency);
 	headerRow(doc, cols);
 	let n = 0;
 	for await (const r of rows) {
 		if (spaceLeft(doc) < ROW_H) {
+			await paced();
 			doc.addPage();
 			headerRow(doc, cols);
 		}
