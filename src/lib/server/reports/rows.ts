@@ -9,13 +9,12 @@
  * revision's from its frozen snapshot `survey_revision_findings`.
  */
 import { and, asc, desc, eq, gt, lt, sql, type AnyColumn } from 'drizzle-orm';
-import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
 import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
 import type { Executor } from '../db/types';
-import { conditionWords, kindWords, statusWords } from '../finding-words';
+import { kindWords } from '../finding-words';
 import type { SavingsItem } from '../savings/ranked-list';
-import { savingFindingSql } from '../savings/ranked-list';
-import type { SavingsBreakdown, SavingsGroup } from '../savings/totals';
+import { savingFindingSql, savingsItem, type ItemColumns } from '../savings/ranked-list';
+import { into, type SavingsBreakdown, type SavingsGroup } from '../savings/totals';
 import type { ReportContent } from './content';
 
 /** One ranked row of a report: the savings list's item, and the version it was published at. */
@@ -27,25 +26,7 @@ export interface ReportRow extends SavingsItem {
 /** Rows read per statement. */
 export const REPORT_PAGE_ROWS = 10_000;
 
-type Raw = {
-	id: string;
-	kind: string;
-	tag: string | null;
-	location: string | null;
-	area: string | null;
-	header: string | null;
-	condition: string | null;
-	status: string;
-	steamKgH: number | null;
-	heatKw: number | null;
-	fuelGjYear: number | null;
-	costMinor: number | null;
-	co2KgYear: number | null;
-	waterM3Year: number | null;
-	repairCostMinor: number | null;
-	paybackYears: number | null;
-	publishedVersion: number | null;
-};
+type Raw = ItemColumns & { publishedVersion: number | null };
 
 /**
  * Where a page starts. The ranking is cost DESC, id ASC, but an index on (survey, cost) read
@@ -140,34 +121,10 @@ export async function* reportRows(
 	let repair = 0;
 	const row = (r: Raw): ReportRow => {
 		rank += 1;
-		const costMinor = Number(r.costMinor);
-		const repairCostMinor = r.repairCostMinor === null ? null : Number(r.repairCostMinor);
-		saving += costMinor;
-		repair += repairCostMinor ?? 0;
+		saving += Number(r.costMinor);
+		repair += r.repairCostMinor === null ? 0 : Number(r.repairCostMinor);
 		return {
-			rank,
-			id: r.id,
-			kind: r.kind as FindingKind,
-			kindWords: kindWords(r.kind),
-			tag: r.tag,
-			location: r.location ?? '',
-			area: r.area,
-			header: r.header,
-			condition: r.condition,
-			conditionWords: conditionWords(r.condition),
-			status: r.status as FindingStatus,
-			statusWords: statusWords(r.status),
-			steamKgH: r.steamKgH,
-			heatKw: r.heatKw,
-			fuelGjYear: r.fuelGjYear,
-			costMinor,
-			currency: content.currency,
-			co2KgYear: r.co2KgYear,
-			waterM3Year: r.waterM3Year,
-			repairCostMinor,
-			paybackYears: r.paybackYears,
-			cumulativeSavingMinor: saving,
-			cumulativeRepairCostMinor: repair,
+			...savingsItem(r, content.currency, { rank, saving, repair }),
 			publishedVersion: r.publishedVersion === null ? null : Number(r.publishedVersion)
 		};
 	};
@@ -201,7 +158,6 @@ export async function* reportRows(
 const ranked = (a: Raw, b: Raw) =>
 	Number(b.costMinor) - Number(a.costMinor) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 
-const num = (v: string | number | null | undefined) => Number(v ?? 0);
 const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
 	b.costMinor - a.costMinor || a.label.localeCompare(b.label);
 
@@ -228,22 +184,7 @@ export async function revisionBreakdown(
 		label: (g: (typeof groups)[number]) => string
 	) => {
 		const map = new Map<string | null, SavingsGroup>();
-		for (const g of groups) {
-			const k = key(g);
-			const group = map.get(k) ?? {
-				key: k,
-				label: label(g),
-				count: 0,
-				costMinor: 0,
-				repairCostMinor: 0,
-				co2KgYear: 0
-			};
-			group.count += num(g.count);
-			group.costMinor += num(g.cost);
-			group.repairCostMinor += num(g.repair);
-			group.co2KgYear += num(g.co2);
-			map.set(k, group);
-		}
+		for (const g of groups) into(map, key(g), label(g), g);
 		return [...map.values()].sort(bySaving);
 	};
 	return {

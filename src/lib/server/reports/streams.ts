@@ -36,7 +36,7 @@ export function pullStream(source: AsyncIterator<string | Uint8Array>): Readable
  * web stream. A failure while writing ends the body with that error.
  */
 export function nodeBody(write: (out: PassThrough) => Promise<void>): ReadableStream<Uint8Array> {
-	const out = new PassThrough({ highWaterMark: 256 * 1024 });
+	const out = new PassThrough({ highWaterMark: 4 * 1024 * 1024 });
 	write(out).catch((e: unknown) => out.destroy(e instanceof Error ? e : new Error(String(e))));
 	return Readable.toWeb(out) as unknown as ReadableStream<Uint8Array>;
 }
