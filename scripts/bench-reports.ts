@@ -16,13 +16,11 @@ import { eq, gt, and } from 'drizzle-orm';
 import { drizzle } from 'drizzle-orm/mysql2';
 import mysql from 'mysql2/promise';
 import * as schema from '../src/lib/server/db/schema';
-import { saveCostBasis } from '../src/lib/server/pricing/cost-basis';
 import { creameryAreas } from '../src/lib/server/seed/areas';
 import { demoFirms, demoSites, demoUsers } from '../src/lib/server/seed/demo';
-import { creameryCostBasis } from '../src/lib/server/seed/findings';
 import { photoKey } from '../src/lib/server/storage';
 import { touchFirm } from '../src/lib/server/sync/counter';
-import { insertBenchFindings } from './bench-desk-rows';
+import { insertBenchFindings, insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
 const DB_NAME = process.env.STEAMWISP_BENCH_REPORTS_DB_NAME ?? 'steamwisp_bench_reports';
@@ -119,39 +117,16 @@ async function pdfFixtures() {
 }
 
 async function exportFixtures() {
-	await db.insert(schema.sites).values({
-		id: bigSite,
-		firmId,
-		clientCompanyId: demoSites[0].clientCompanyId,
-		name: 'Benchmark works (100,000 saving findings)',
-		elevation: 120
-	});
-	await db.insert(schema.headers).values([
-		{ id: bigHeaders[0], siteId: bigSite, name: 'HP 10 bar', pressure: 1.1 },
-		{ id: bigHeaders[1], siteId: bigSite, name: 'LP 3 bar', pressure: 0.4 }
-	]);
-	await saveCostBasis(db, {
-		firmId,
-		siteId: bigSite,
-		actorId,
-		basis: creameryCostBasis,
-		note: 'bench'
-	});
-	await db.insert(schema.surveys).values({
-		id: bigSurvey,
-		firmId,
-		siteId: bigSite,
-		name: 'Benchmark works survey',
-		status: 'in-review'
-	});
-	await insertBenchFindings(
+	await insertBenchSite(
 		db,
 		{
+			firmId,
+			clientCompanyId: demoSites[0].clientCompanyId,
+			actorId,
 			siteId: bigSite,
 			surveyId: bigSurvey,
-			headerIds: bigHeaders,
-			areaIds: [],
-			tags: false,
+			headerIds: [bigHeaders[0], bigHeaders[1]],
+			siteName: 'Benchmark works (100,000 saving findings)',
 			prefix: 'BX'
 		},
 		EXPORT_ROWS
