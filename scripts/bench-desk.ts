@@ -13,7 +13,7 @@
  * 3. recomputing the same 100,000 from their inputs (recomputeSite).
  * Figures are printed; nothing is asserted.
  */
-import { spawn, spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -28,7 +28,7 @@ import { touchFirm } from '../src/lib/server/sync/counter';
 import { creameryAreas } from '../src/lib/server/seed/areas';
 import { demoFirms, demoPassword, demoSites, demoUsers } from '../src/lib/server/seed/demo';
 import { creameryCostBasis } from '../src/lib/server/seed/findings';
-import { waitForApp } from './bench-app';
+import { freshBenchDatabase, run, waitForApp } from './bench-app';
 import { insertBenchFindings, insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
@@ -46,18 +46,7 @@ const bigSite = 'be4c0000-0000-4000-8000-000000000002';
 const bigSurvey = 'be4c0000-0000-4000-8000-000000000003';
 const bigHeaders = ['be4c0000-0000-4000-8000-000000000004', 'be4c0000-0000-4000-8000-000000000005'];
 
-function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env) {
-	const r = spawnSync(command, args, { env, stdio: ['ignore', 'ignore', 'inherit'] });
-	if (r.status !== 0) throw new Error(`${command} ${args.join(' ')} failed (${r.status})`);
-}
-
-const dbWasRunning =
-	spawnSync('bash', ['scripts/db.sh', 'status'], { stdio: 'ignore' }).status === 0;
-const { STEAMWISP_DB_NAME: _unset, ...withoutName } = process.env;
-run('bash', ['scripts/db.sh', 'fresh', DB_NAME], withoutName);
-process.env.STEAMWISP_DB_NAME = DB_NAME;
-run('npx', ['tsx', 'scripts/migrate.ts']);
-run('npx', ['tsx', 'scripts/seed.ts']);
+const database = freshBenchDatabase(DB_NAME);
 if (!existsSync('build/index.js')) run('node_modules/.bin/vite', ['build', '--logLevel', 'error']);
 
 const pool = mysql.createPool({ uri: databaseUrl(), connectionLimit: 4, timezone: 'Z' });
@@ -270,5 +259,5 @@ try {
 } finally {
 	app.kill();
 	await pool.end();
-	if (!dbWasRunning) run('bash', ['scripts/db.sh', 'stop']);
+	database.done();
 }

@@ -20,6 +20,7 @@ import { creameryAreas } from '../src/lib/server/seed/areas';
 import { demoFirms, demoSites, demoUsers } from '../src/lib/server/seed/demo';
 import { photoKey } from '../src/lib/server/storage';
 import { touchFirm } from '../src/lib/server/sync/counter';
+import { freshBenchDatabase } from './bench-app';
 import { insertBenchFindings, insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
@@ -36,18 +37,7 @@ const bigSurvey = 'be4e0000-0000-4000-8000-000000000003';
 const bigHeaders = ['be4e0000-0000-4000-8000-000000000004', 'be4e0000-0000-4000-8000-000000000005'];
 const PHOTO = readFileSync('tests/fixtures/trap-photo.jpg');
 
-function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env) {
-	const r = spawnSync(command, args, { env, stdio: ['ignore', 'ignore', 'inherit'] });
-	if (r.status !== 0) throw new Error(`${command} ${args.join(' ')} failed (${r.status})`);
-}
-
-const dbWasRunning =
-	spawnSync('bash', ['scripts/db.sh', 'status'], { stdio: 'ignore' }).status === 0;
-const { STEAMWISP_DB_NAME: _unset, ...withoutName } = process.env;
-run('bash', ['scripts/db.sh', 'fresh', DB_NAME], withoutName);
-process.env.STEAMWISP_DB_NAME = DB_NAME;
-run('npx', ['tsx', 'scripts/migrate.ts']);
-run('npx', ['tsx', 'scripts/seed.ts']);
+const database = freshBenchDatabase(DB_NAME);
 
 const pool = mysql.createPool({ uri: databaseUrl(), connectionLimit: 4, timezone: 'Z' });
 const db = drizzle(pool, { schema, mode: 'default' });
@@ -186,5 +176,5 @@ try {
 } finally {
 	await pool.end();
 	rmSync(work, { recursive: true, force: true });
-	if (!dbWasRunning) run('bash', ['scripts/db.sh', 'stop']);
+	database.done();
 }
