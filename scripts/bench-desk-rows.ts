@@ -8,7 +8,9 @@ import type { FindingInput } from '../src/lib/steam/index';
 import * as schema from '../src/lib/server/db/schema';
 import type { Db } from '../src/lib/server/db/types';
 import { pricingContext } from '../src/lib/server/pricing/context';
+import { saveCostBasis } from '../src/lib/server/pricing/cost-basis';
 import { figureColumns } from '../src/lib/server/pricing/figures';
+import { creameryCostBasis } from '../src/lib/server/seed/findings';
 
 const TRAP_TYPES = ['thermodynamic', 'inverted-bucket', 'float-thermostatic'] as const;
 // Mostly working traps, as a real round finds them; a quarter failed or leaking.
@@ -126,4 +128,61 @@ export async function insertBenchFindings(db: Db, place: BenchPlace, n: number):
 		if (assets.length > 0) await db.insert(schema.assets).values(assets);
 		await db.insert(schema.findings).values(rows);
 	}
+}
+
+export interface BenchSite {
+	firmId: string;
+	clientCompanyId: string;
+	/** Saves the site's cost basis. */
+	actorId: string;
+	siteId: string;
+	surveyId: string;
+	/** Two headers: 10 bar and 3 bar. */
+	headerIds: [string, string];
+	siteName: string;
+	prefix: string;
+}
+
+/**
+ * A site of its own with two headers, the creamery's cost basis and one survey in review of
+ * `n` findings without tags or areas (the Desk's and the reports' benchmarks at 100,000).
+ */
+export async function insertBenchSite(db: Db, s: BenchSite, n: number): Promise<void> {
+	await db.insert(schema.sites).values({
+		id: s.siteId,
+		firmId: s.firmId,
+		clientCompanyId: s.clientCompanyId,
+		name: s.siteName,
+		elevation: 120
+	});
+	await db.insert(schema.headers).values([
+		{ id: s.headerIds[0], siteId: s.siteId, name: 'HP 10 bar', pressure: 1.1 },
+		{ id: s.headerIds[1], siteId: s.siteId, name: 'LP 3 bar', pressure: 0.4 }
+	]);
+	await saveCostBasis(db, {
+		firmId: s.firmId,
+		siteId: s.siteId,
+		actorId: s.actorId,
+		basis: creameryCostBasis,
+		note: 'bench'
+	});
+	await db.insert(schema.surveys).values({
+		id: s.surveyId,
+		firmId: s.firmId,
+		siteId: s.siteId,
+		name: 'Benchmark works survey',
+		status: 'in-review'
+	});
+	await insertBenchFindings(
+		db,
+		{
+			siteId: s.siteId,
+			surveyId: s.surveyId,
+			headerIds: s.headerIds,
+			areaIds: [],
+			tags: false,
+			prefix: s.prefix
+		},
+		n
+	);
 }

@@ -15,6 +15,7 @@ import { deskAreaMatrix } from './authorization-matrix.desk-areas';
 import { deskReviewMatrix } from './authorization-matrix.desk-review';
 import { deskSurveysMatrix } from './authorization-matrix.desk-surveys';
 import { publishMatrix } from './authorization-matrix.publish';
+import { reportsMatrix } from './authorization-matrix.reports';
 import { savingsMatrix } from './authorization-matrix.savings';
 import {
 	type Case,
@@ -180,6 +181,7 @@ export const matrix: Record<string, Record<string, Case>> = {
 	...deskReviewMatrix,
 	...savingsMatrix,
 	...publishMatrix,
+	...reportsMatrix,
 
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }

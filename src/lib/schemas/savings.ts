@@ -3,6 +3,7 @@
  * and the orders it ranks by. Shared by the server and the pages that ask for it.
  */
 import { z } from 'zod';
+import { readQueryString } from './query-string';
 
 /** savings: annual saving, biggest first; payback: shortest first; co2: most CO2 avoided first. */
 export const SAVINGS_RANKS = ['savings', 'payback', 'co2'] as const;
@@ -33,16 +34,5 @@ export const savingsQuerySchema = z.strictObject(
 export type SavingsQuery = z.output<typeof savingsQuerySchema>;
 
 /** The query string as the schema reads it; a parameter given twice is refused. */
-export function readSavingsQuery(
-	params: URLSearchParams
-): { ok: true; query: SavingsQuery } | { ok: false; message: string } {
-	const raw: Record<string, string> = {};
-	for (const name of new Set(params.keys())) {
-		const values = params.getAll(name);
-		if (values.length > 1) return { ok: false, message: `Give ${name} only once.` };
-		raw[name] = values[0];
-	}
-	const parsed = savingsQuerySchema.safeParse(raw);
-	if (parsed.success) return { ok: true, query: parsed.data };
-	return { ok: false, message: parsed.error.issues[0]?.message ?? 'Check the query.' };
-}
+export const readSavingsQuery = (params: URLSearchParams) =>
+	readQueryString(params, savingsQuerySchema);

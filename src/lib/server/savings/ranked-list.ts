@@ -147,8 +147,43 @@ export async function rankedItems(
 		.leftJoin(areas, eq(areas.id, ranked.areaId))
 		.leftJoin(headers, eq(headers.id, ranked.headerId))
 		.orderBy(asc(ranked.place));
-	return rows.map((r) => ({
-		rank: Number(r.place),
+	return rows.map((r) =>
+		savingsItem(r, survey.currency, {
+			rank: Number(r.place),
+			saving: Number(r.cumulativeSaving),
+			repair: Number(r.cumulativeRepair)
+		})
+	);
+}
+
+/** The stored columns of one listed finding, as a query gives them. */
+export interface ItemColumns {
+	id: string;
+	kind: string;
+	tag: string | null;
+	location: string | null;
+	area: string | null;
+	header: string | null;
+	condition: string | null;
+	status: string;
+	steamKgH: number | null;
+	heatKw: number | null;
+	fuelGjYear: number | null;
+	costMinor: string | number | null;
+	co2KgYear: number | null;
+	waterM3Year: number | null;
+	repairCostMinor: string | number | null;
+	paybackYears: number | null;
+}
+
+/** A listed finding with its words, its money as numbers, its place and the running sums. */
+export function savingsItem(
+	r: ItemColumns,
+	currency: string,
+	at: { rank: number; saving: number; repair: number }
+): SavingsItem {
+	return {
+		rank: at.rank,
 		id: r.id,
 		kind: r.kind as FindingKind,
 		kindWords: kindWords(r.kind),
@@ -164,12 +199,12 @@ export async function rankedItems(
 		heatKw: r.heatKw,
 		fuelGjYear: r.fuelGjYear,
 		costMinor: Number(r.costMinor),
-		currency: survey.currency,
+		currency,
 		co2KgYear: r.co2KgYear,
 		waterM3Year: r.waterM3Year,
 		repairCostMinor: n(r.repairCostMinor),
 		paybackYears: r.paybackYears,
-		cumulativeSavingMinor: Number(r.cumulativeSaving),
-		cumulativeRepairCostMinor: Number(r.cumulativeRepair)
-	}));
+		cumulativeSavingMinor: at.saving,
+		cumulativeRepairCostMinor: at.repair
+	};
 }

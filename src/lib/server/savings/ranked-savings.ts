@@ -56,27 +56,34 @@ async function lifeTerms(db: Executor, basisId: string | null) {
 	return discountRate === undefined || lifeYears === undefined ? null : { discountRate, lifeYears };
 }
 
+/** NPV and IRR of a list's totals on a basis's life and discount rate; null without them. */
+export async function wholeEconomics(
+	db: Executor,
+	basisId: string | null,
+	totals: Pick<SavingsTotals, 'count' | 'withoutRepairCost' | 'repairCostMinor' | 'costMinor'>
+): Promise<WholeEconomics | null> {
+	const terms = await lifeTerms(db, basisId);
+	const priced = totals.count > 0 && totals.withoutRepairCost < totals.count;
+	if (!terms || !priced) return null;
+	return {
+		...terms,
+		...measureEconomics(
+			{ costMinor: totals.repairCostMinor, annualSavingMinor: totals.costMinor },
+			terms
+		)
+	};
+}
+
 export async function rankedSavings(
 	db: Executor,
 	survey: SavingsSurvey,
 	{ rank }: { rank: SavingsRank }
 ): Promise<RankedSavings> {
-	const [items, { totals, breakdown }, terms] = await Promise.all([
+	const [items, { totals, breakdown }] = await Promise.all([
 		rankedItems(db, survey, rank, MAX_SAVINGS_ITEMS),
-		savingsTotals(db, survey),
-		lifeTerms(db, survey.basisId)
+		savingsTotals(db, survey)
 	]);
-	const priced = totals.count > 0 && totals.withoutRepairCost < totals.count;
-	const economics =
-		terms && priced
-			? {
-					...terms,
-					...measureEconomics(
-						{ costMinor: totals.repairCostMinor, annualSavingMinor: totals.costMinor },
-						terms
-					)
-				}
-			: null;
+	const economics = await wholeEconomics(db, survey.basisId, totals);
 	return {
 		rank,
 		items,

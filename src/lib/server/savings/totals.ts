@@ -67,6 +67,30 @@ const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
 	a.label.localeCompare(b.label) ||
 	(a.key ?? '\uffff').localeCompare(b.key ?? '\uffff');
 
+type GroupSums = Record<'count' | 'cost' | 'repair' | 'co2', string | number | null | undefined>;
+
+/** Adds one aggregate row's sums into its group of a breakdown (made on first use). */
+export function into(
+	map: Map<string | null, SavingsGroup>,
+	key: string | null,
+	label: string,
+	g: GroupSums
+): void {
+	const group = map.get(key) ?? {
+		key,
+		label,
+		count: 0,
+		costMinor: 0,
+		repairCostMinor: 0,
+		co2KgYear: 0
+	};
+	group.count += num(g.count);
+	group.costMinor += num(g.cost);
+	group.repairCostMinor += num(g.repair);
+	group.co2KgYear += num(g.co2);
+	map.set(key, group);
+}
+
 export async function savingsTotals(
 	db: Executor,
 	survey: { id: string; basisId: string | null; currency: string }
@@ -113,26 +137,6 @@ export async function savingsTotals(
 	};
 	const byKind = new Map<string, SavingsGroup>();
 	const byArea = new Map<string | null, SavingsGroup>();
-	const into = (
-		map: Map<string | null, SavingsGroup>,
-		key: string | null,
-		label: string,
-		g: (typeof groups)[number]
-	) => {
-		const group = map.get(key) ?? {
-			key,
-			label,
-			count: 0,
-			costMinor: 0,
-			repairCostMinor: 0,
-			co2KgYear: 0
-		};
-		group.count += num(g.count);
-		group.costMinor += num(g.cost);
-		group.repairCostMinor += num(g.repair);
-		group.co2KgYear += num(g.co2);
-		map.set(key, group);
-	};
 	for (const g of groups) {
 		totals.outOfDate += num(g.outOfDate);
 		totals.withoutFigures += num(g.withoutFigures);

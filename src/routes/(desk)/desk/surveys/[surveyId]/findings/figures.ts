@@ -1,9 +1,12 @@
-/** The review table's cells: the shared figure formatting ($lib/components/savings/figures). */
-import { cellText, type FigureColumn } from '$lib/components/savings/figures';
+/**
+ * The table's figures in the person's units (stored figures are kg/h, kW, GJ, kg, m³ per year;
+ * money in minor units of its currency). Numbers only: the column headers carry the units.
+ */
+import { cellText, type FigureColumn } from '$lib/figures';
 import type { UnitSystemId } from '$lib/units';
 import type { FindingItem, FindingTotals } from '$lib/server/desk/findings-query';
 
-export { columnTitle, type FigureColumn } from '$lib/components/savings/figures';
+export { cellText, columnTitle, type FigureColumn } from '$lib/figures';
 
 /** One row's cell. */
 export const figureText = (item: FindingItem, column: FigureColumn, system: UnitSystemId) =>
