@@ -60,7 +60,7 @@ let trapRepair = { entryId: '', version: 0 };
 
 beforeAll(async () => {
 	await setUp(db);
-	const made = [
+	const made: Record<string, string>[] = [
 		{ kind: 'trap-repair', trapType: 'thermodynamic', dn: '15', unitCost: '80', labourHours: '1' },
 		{
 			kind: 'trap-replacement',
