@@ -20,6 +20,8 @@ const entryKey = 'fitting-cover:flange-pair:150';
 let db: Db;
 /** The findings the test groups, with the measure each was in before. */
 let moved: { id: string; measure_id: string | null }[] = [];
+/** The library entry as seeded, put back afterwards. */
+let seeded: { version: number; unit_cost_minor: number; demo: number } | undefined;
 test.beforeAll(() => {
 	db = openTestDb();
 });
@@ -40,6 +42,13 @@ test.afterAll(async () => {
 			made.measure_id,
 			'Dryer drip legs'
 		]);
+	}
+	if (seeded) {
+		await rows(
+			db,
+			'UPDATE cost_entries SET unit_cost_minor = ?, demo = 1 WHERE entry_key = ? AND firm_id = ?',
+			[seeded.unit_cost_minor, entryKey, consultant.firmId]
+		);
 	}
 	await rows(
 		db,
@@ -66,6 +75,7 @@ test('a consultant edits the library, prices a survey, groups a measure and read
 	const entry = page.locator(`[data-entry="${entryKey}"]`);
 	await expect(entry).toContainText('demo values');
 	const before = await entryRow();
+	seeded = before;
 
 	// A bad amount: the message beside the field, nothing saved.
 	await entry.getByLabel(/Parts and material/).fill('twelve');
@@ -139,7 +149,9 @@ test('a consultant edits the library, prices a survey, groups a measure and read
 	// A bad scaffold cost: beside the field, nothing saved; then a good one, and the payback.
 	await page.getByLabel('Scaffold').fill('lots');
 	await page.getByRole('button', { name: 'Save the measure' }).click();
-	await expect(page.getByText('Scaffold must be a plain amount')).toBeVisible();
+	await expect(page.getByLabel('Scaffold')).toHaveAccessibleDescription(
+		/Scaffold must be a plain amount/
+	);
 	const measureId = page.url().split('/').pop()!;
 	const scaffold = async () =>
 		(
