@@ -46,9 +46,10 @@ describe('matching a finding to its library entry', () => {
 			ok: false,
 			reason: 'surface'
 		});
-		expect(matchFinding({ kind: 'insulation', inputs: { item: 'pipe', dn: 50, layers } })).toEqual(
-			{ ok: false, reason: 'no-length' }
-		);
+		expect(matchFinding({ kind: 'insulation', inputs: { item: 'pipe', dn: 50, layers } })).toEqual({
+			ok: false,
+			reason: 'no-length'
+		});
 	});
 
 	it('matches a leak by its size class only', () => {
@@ -59,7 +60,10 @@ describe('matching a finding to its library entry', () => {
 			ok: false,
 			reason: 'no-size'
 		});
-		expect(matchFinding({ kind: 'header', inputs: {} })).toEqual({ ok: false, reason: 'no-repair' });
+		expect(matchFinding({ kind: 'header', inputs: {} })).toEqual({
+			ok: false,
+			reason: 'no-repair'
+		});
 	});
 
 	it('makes the keys the library rows carry', () => {

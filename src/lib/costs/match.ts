@@ -52,7 +52,8 @@ export interface MatchedFinding {
 
 /** Why a finding has no library cost (the words the Desk shows, grouped by reason). */
 export const NO_MATCH_REASONS = {
-	'no-repair': 'needs no repair (a working trap, one out of service or not reached, a header reading)',
+	'no-repair':
+		'needs no repair (a working trap, one out of service or not reached, a header reading)',
 	surface: 'is a flat surface: priced by quote, the library has no entry per square metre',
 	'no-size': 'was recorded by outer diameter or hole size rather than a nominal size or size class',
 	'no-length': 'is a pipe run without a length',
@@ -145,8 +146,7 @@ export interface PricedEntry {
 }
 
 export type Priced =
-	| { ok: true; entry: PricedEntry; costMinor: number }
-	| { ok: false; reason: NoMatchReason };
+	{ ok: true; entry: PricedEntry; costMinor: number } | { ok: false; reason: NoMatchReason };
 
 /**
  * The repair cost of a matched finding, whole minor units of the site's currency:
