@@ -8,7 +8,7 @@ import { randomUUID } from 'node:crypto';
 import type { CostEntryForm } from '../../schemas/costs';
 import { recordChange } from '../audit';
 import { costEntries, type CostEntryRow } from '../db/schema';
-import type { Db, Executor } from '../db/types';
+import type { Db, Executor, Tx } from '../db/types';
 
 /** The firm's live entries, grouped by kind in the order the page shows them. */
 export async function listCostEntries(db: Executor, firmId: string): Promise<CostEntryRow[]> {
@@ -47,6 +47,22 @@ const identityColumns = (form: CostEntryForm) => {
 	};
 };
 
+/** A live entry of the firm, locked for the caller's transaction (undefined: none). */
+async function lockLiveEntry(tx: Tx, firmId: string, entryId: string) {
+	const [row] = await tx
+		.select()
+		.from(costEntries)
+		.where(
+			and(
+				eq(costEntries.id, entryId),
+				eq(costEntries.firmId, firmId),
+				isNull(costEntries.deletedAt)
+			)
+		)
+		.for('update');
+	return row as CostEntryRow | undefined;
+}
+
 /**
  * Creates an entry (`target` null) or writes the next version of one. A retired entry with the
  * same key is brought back as the next version, so its history stays one row's.
@@ -66,17 +82,7 @@ export async function saveCostEntry(
 			.for('update');
 		let current: CostEntryRow | undefined;
 		if (target) {
-			[current] = await tx
-				.select()
-				.from(costEntries)
-				.where(
-					and(
-						eq(costEntries.id, target.entryId),
-						eq(costEntries.firmId, firmId),
-						isNull(costEntries.deletedAt)
-					)
-				)
-				.for('update');
+			current = await lockLiveEntry(tx, firmId, target.entryId);
 			if (!current) return { kind: 'missing' as const };
 			if (current.version !== target.version) return { kind: 'moved' as const };
 			if (clash && clash.id !== current.id) return { kind: 'duplicate' as const };
@@ -134,17 +140,7 @@ export async function retireCostEntry(
 	target: { entryId: string; version: number }
 ): Promise<'retired' | 'moved' | 'missing'> {
 	return db.transaction(async (tx) => {
-		const [row] = await tx
-			.select()
-			.from(costEntries)
-			.where(
-				and(
-					eq(costEntries.id, target.entryId),
-					eq(costEntries.firmId, firmId),
-					isNull(costEntries.deletedAt)
-				)
-			)
-			.for('update');
+		const row = await lockLiveEntry(tx, firmId, target.entryId);
 		if (!row) return 'missing' as const;
 		if (row.version !== target.version) return 'moved' as const;
 		await tx

@@ -14,8 +14,7 @@ import { uuidSchema } from '../../schemas/common';
 import { db } from '../db';
 import { findings, sites, surveys } from '../db/schema';
 import { fieldErrors, formProblem, type FormObject } from '../forms';
-import { findingsFrozen } from '../publish/lock';
-import { DESK_LOCKED_MESSAGE } from '../publish/lock';
+import { DESK_LOCKED_MESSAGE, lockedStage } from '../publish/lock';
 import { unitSystemOf } from '../walk/person';
 import { surveyMeasures } from './sums';
 import {
@@ -39,14 +38,21 @@ export const MEASURE_FIELDS = [
 
 async function surveyHead(surveyId: string) {
 	const [row] = await db
-		.select({ id: surveys.id, name: surveys.name, stage: surveys.status, currency: sites.currency })
+		.select({
+			id: surveys.id,
+			name: surveys.name,
+			stage: surveys.status,
+			publishedAt: surveys.publishedAt,
+			currency: sites.currency
+		})
 		.from(surveys)
 		.innerJoin(sites, eq(sites.id, surveys.siteId))
 		.where(eq(surveys.id, surveyId))
 		.limit(1);
 	if (!row) return null;
-	const frozen = await db.transaction((tx) => findingsFrozen(tx, surveyId));
-	return { ...row, frozen };
+	const { publishedAt, ...head } = row;
+	// What the page says; every write reads the lock again in its own transaction.
+	return { ...head, frozen: lockedStage(row.stage, publishedAt !== null) };
 }
 
 export async function measuresPage(userId: string, surveyId: string) {
