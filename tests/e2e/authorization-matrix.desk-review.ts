@@ -1,5 +1,6 @@
 /** Authorization matrix entries for the Desk's the findings review, its API and conflicts (see authorization-matrix.table.ts). */
 import { type Case, deskAction, deskPage, mine } from './support/matrix-kit';
+import { findingCostOperations } from './authorization-matrix.costs';
 import type { Tenant } from './support/tenants';
 
 /** No finding has this id: the bulk review refuses it (400) without writing anything. */
@@ -40,6 +41,7 @@ const staffPage = { ...deskPage, admin: mine, consultant: mine };
 const findingDetail: Record<string, Record<string, Case>> = {
 	'/(desk)/desk/surveys/[surveyId]/findings/[findingId]': {
 		GET: { request: (t) => ({ path: findingPath(t) }), expect: staffPage },
+		...findingCostOperations,
 		// Only the version: every input is missing, so the edit is refused field by field.
 		'POST ?/edit': {
 			request: (t) => ({ path: findingPath(t), form: { version: '1' } }),

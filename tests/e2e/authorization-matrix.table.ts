@@ -11,6 +11,7 @@
  * 'signin' means a redirect to the sign-in page. Requests that change data must be harmless to
  * repeat (they run once per role and tenant).
  */
+import { costsMatrix } from './authorization-matrix.costs';
 import { deskAreaMatrix } from './authorization-matrix.desk-areas';
 import { deskReviewMatrix } from './authorization-matrix.desk-review';
 import { deskSurveysMatrix } from './authorization-matrix.desk-surveys';
@@ -182,6 +183,7 @@ export const matrix: Record<string, Record<string, Case>> = {
 	...savingsMatrix,
 	...publishMatrix,
 	...reportsMatrix,
+	...costsMatrix,
 
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }

@@ -40,9 +40,14 @@ describe('migrations', () => {
 		const columns = await rows<{ column_name: string; data_type: string }>(
 			sql`SELECT column_name, data_type FROM information_schema.columns
 			    WHERE table_schema = DATABASE() AND column_name LIKE '%cost%'
-			      AND column_name NOT LIKE '%\\_id'`
+			      AND column_name NOT LIKE '%\\_id'
+			      -- Named for a cost but no money: where it came from, its note, a label, a version.
+			      AND column_name NOT IN ('repair_cost_source', 'repair_cost_note',
+			        'other_cost_label', 'cost_entry_version')`
 		);
-		expect(columns.map((c) => c.column_name)).toContain('cost_minor');
+		const names = columns.map((c) => c.column_name);
+		for (const money of ['cost_minor', 'unit_cost_minor', 'scaffold_cost_minor'])
+			expect(names).toContain(money);
 		for (const c of columns)
 			expect(['bigint', 'decimal', 'longtext', 'json']).toContain(c.data_type);
 	});

@@ -38,6 +38,8 @@ export interface Tenant {
 	conflictId: string;
 	/** The survey they are on. */
 	findingSurveyId: string;
+	/** A measure grouping that finding (the brewhouse survey is published: it is frozen). */
+	measureId: string;
 	invitationId: string;
 	messageId: string;
 	/** Text that may appear only in answers to this firm's people. */
@@ -73,7 +75,8 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		invitation: hex(index, 6),
 		finding: hex(index, 7),
 		conflict: hex(index, 8),
-		conflictMutation: hex(index, 9)
+		conflictMutation: hex(index, 9),
+		measure: hex(index, 10)
 	};
 	const names = {
 		otherClient: `${tag} Matrix Brewery`,
@@ -140,6 +143,12 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 			})
 		]
 	);
+	await db.query(
+		`INSERT INTO measures (id, survey_id, name) VALUES (?, ?, ?)
+		 ON DUPLICATE KEY UPDATE deleted_at = NULL`,
+		[ids.measure, ids.otherSurvey, `${tag} matrix measure`]
+	);
+	await db.query('UPDATE findings SET measure_id = ? WHERE id = ?', [ids.measure, ids.finding]);
 	const auditor = demoUsers.find((u) => u.firmId === firm.id && u.role === 'auditor')!;
 	await db.query(
 		`INSERT INTO finding_conflicts (id, firm_id, survey_id, finding_id, user_id, device_id,
@@ -192,6 +201,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		findingId: ids.finding,
 		conflictId: ids.conflict,
 		findingSurveyId: ids.otherSurvey,
+		measureId: ids.measure,
 		invitationId: ids.invitation,
 		messageId: message.id,
 		markers: [

@@ -4,6 +4,7 @@
  */
 export * from './schema/tenancy';
 export * from './schema/sites';
+export * from './schema/costs';
 export * from './schema/surveys';
 export * from './schema/client';
 export * from './schema/audit';

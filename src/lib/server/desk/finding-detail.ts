@@ -268,6 +268,10 @@ export async function findingDetail(
 			status: row.status,
 			capture,
 			repairCost: row.repairCost,
+			repairCostSource: row.repairCostSource,
+			repairCostNote: row.repairCostNote,
+			costEntryVersion: row.costEntryVersion,
+			measureId: row.measureId,
 			recordedBy: nameOf(row.recordedBy),
 			reviewedAt: row.reviewedAt?.toISOString() ?? null,
 			reviewedBy: nameOf(row.reviewedBy)

@@ -124,6 +124,15 @@ export async function writeNextVersion(
 				...captureColumns(capture, asset?.id ?? null),
 				...figures,
 				repairCost,
+				// A figure typed in the edit form is the consultant's own (docs/costs.md).
+				...(repairCost === row.repairCost
+					? {}
+					: {
+							repairCostSource: repairCost === null ? null : 'edited',
+							repairCostNote: null,
+							costEntryId: null,
+							costEntryVersion: null
+						}),
 				// A kept capture brings a deleted finding back.
 				deletedAt: null,
 				version,

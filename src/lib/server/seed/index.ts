@@ -4,6 +4,7 @@ import { hashPassword } from '../auth/password';
 import * as schema from '../db/schema';
 import { demoClients, demoFirms, demoPassword, demoSites, demoSurveys, demoUsers } from './demo';
 import { renameOldDemoPlaces } from './renames';
+import { seedCosts } from './seed-costs';
 import { seedConflicts, seedMaltings } from './seed-desk';
 import { seedDemoFindings } from './seed-findings';
 
@@ -58,4 +59,5 @@ export async function seedDemo(db: Db): Promise<void> {
 	await seedDemoFindings(db);
 	await seedMaltings(db);
 	await seedConflicts(db);
+	await seedCosts(db);
 }

@@ -12,6 +12,7 @@ import {
 import type { PhysicsDetail } from '../../pricing/stored';
 import type { PhysicsFlows } from '../../../steam/losses/pricing';
 import { at, changeSeq, createdAt, id, money, updatedAt, uuid, version, word } from './columns';
+import { costEntries } from './costs';
 import { areas, assets, costBases, headers, sites } from './sites';
 import { firms, users } from './tenancy';
 
@@ -81,8 +82,19 @@ export const measures = mysqlTable(
 			.references(() => surveys.id),
 		name: varchar('name', { length: 160 }).notNull(),
 		description: text('description'),
-		/** Overrides the sum of its findings' repair costs when set (minor units). */
+		/**
+		 * Overrides the sum of its findings' repair costs when set (minor units). Not used by the
+		 * app (docs/costs.md: a measure costs its findings plus its own extra costs below).
+		 */
 		repairCost: money('repair_cost_minor'),
+		/** The job's own costs beyond its findings' repairs, minor units of the site's currency. */
+		accessCost: money('access_cost_minor').notNull().default(0),
+		scaffoldCost: money('scaffold_cost_minor').notNull().default(0),
+		shutdownCost: money('shutdown_cost_minor').notNull().default(0),
+		otherCost: money('other_cost_minor').notNull().default(0),
+		/** What the other cost is for. */
+		otherCostLabel: varchar('other_cost_label', { length: 120 }),
+		createdBy: uuid('created_by').references(() => users.id),
 		sortOrder: int('sort_order').notNull().default(0),
 		deletedAt: at('deleted_at'),
 		version: version(),
@@ -153,6 +165,13 @@ export const findings = mysqlTable(
 		/** Simple payback of the repair, years; null without a repair cost or saving. */
 		paybackYears: double('payback_years'),
 		repairCost: money('repair_cost_minor'),
+		/** Where the repair cost came from: library | edited | quote; null: no cost. */
+		repairCostSource: word('repair_cost_source'),
+		/** A quote's reference (supplier, number, date) or an edited figure's reason. */
+		repairCostNote: varchar('repair_cost_note', { length: 160 }),
+		/** The library entry (and its version) a library cost was priced from. */
+		costEntryId: uuid('cost_entry_id').references(() => costEntries.id),
+		costEntryVersion: int('cost_entry_version'),
 		measureId: uuid('measure_id').references(() => measures.id),
 		/** draft | reviewed | published | approved | scheduled | repaired | declined | verified */
 		status: word('status').notNull().default('draft'),
@@ -181,7 +200,8 @@ export const findings = mysqlTable(
 		index('findings_seq_idx').on(t.changeSeq),
 		// The Desk's table sorts a survey's findings by these most often.
 		index('findings_survey_cost_idx').on(t.surveyId, t.cost),
-		index('findings_survey_status_idx').on(t.surveyId, t.status)
+		index('findings_survey_status_idx').on(t.surveyId, t.status),
+		index('findings_measure_idx').on(t.measureId)
 	]
 );
 

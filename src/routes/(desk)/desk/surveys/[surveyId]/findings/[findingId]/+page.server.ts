@@ -1,6 +1,8 @@
 import { error, fail } from '@sveltejs/kit';
 import { uuidSchema } from '$lib/schemas/common';
+import { findingCostFormSchema } from '$lib/schemas/costs';
 import { findingEditFormSchema, reviewFormSchema } from '$lib/schemas/desk-finding';
+import { findingCostForm } from '$lib/server/costs/desk';
 import { MOVED_MESSAGE } from '$lib/server/desk/finding-edit';
 import { openFinding, reviewFinding, saveFindingEdit } from '$lib/server/desk/finding-pages';
 import { formProblem, parseForm } from '$lib/server/forms';
@@ -61,6 +63,31 @@ export const actions: Actions = {
 			case 'missing':
 				return hide();
 		}
+	},
+
+	/** The repair cost and where it came from: the library, an edited figure or a quote. */
+	cost: async (event) => {
+		const { user, surveyId, findingId } = await writer(event);
+		const form = await parseForm(event.request, findingCostFormSchema, [
+			'source',
+			'amount',
+			'note'
+		]);
+		if (!form.ok) return form.failure;
+		const { source, amount, note } = form.data;
+		const choice =
+			source === 'edited' || source === 'quote' ? { source, amount, note } : { source };
+		const target = { firmId: user.firmId, actorId: user.id, surveyId, findingId };
+		const outcome = await findingCostForm(target, choice);
+		if (outcome.kind === 'frozen') return formProblem(409, DESK_LOCKED_MESSAGE);
+		if (outcome.kind === 'missing') return hide();
+		if (outcome.kind === 'unmatched') {
+			return formProblem(400, outcome.message, {
+				values: form.fields,
+				errors: { source: outcome.message }
+			});
+		}
+		return { action: 'cost', costSaved: source };
 	},
 
 	review: async (event) => {

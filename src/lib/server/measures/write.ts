@@ -1,0 +1,225 @@
+/**
+ * Writing measures (docs/costs.md): create one from picked findings, rename it and set its
+ * extra costs, add or take away findings, delete it. Each runs in one transaction that reads
+ * the survey's publication lock first (a published survey's measures are frozen with its
+ * findings), checks every id belongs to this survey (another survey's or firm's ids change
+ * nothing), moves the firm's change counter so the cached table and savings views refresh, and
+ * writes one audit row.
+ */
+import { and, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { randomUUID } from 'node:crypto';
+import type { MeasureExtra } from '../../schemas/costs';
+import { recordChange } from '../audit';
+import { findings, measures, surveys } from '../db/schema';
+import type { Db, Tx } from '../db/types';
+import { findingsFrozen } from '../publish/lock';
+import { touchFirm } from '../sync/counter';
+
+export interface MeasureTarget {
+	firmId: string;
+	actorId: string;
+	surveyId: string;
+}
+
+export interface MeasureDetails {
+	name: string;
+	description: string | null;
+	extras: Record<MeasureExtra, number>;
+	otherLabel: string | null;
+}
+
+export type MeasureOutcome =
+	| { kind: 'done'; measureId: string; findings?: number }
+	| { kind: 'frozen' }
+	| { kind: 'missing' }
+	/** Some picked findings are not live findings of this survey: nothing was changed. */
+	| { kind: 'foreign'; count: number };
+
+type Done = Extract<MeasureOutcome, { kind: 'done' }>;
+type Step = (tx: Tx) => Promise<Done>;
+
+/** The common frame: lock order, the survey in the firm, the counter and the audit row. */
+async function inSurvey(
+	db: Db,
+	t: MeasureTarget,
+	action: string,
+	step: Step,
+	audit: (outcome: Done) => unknown
+): Promise<MeasureOutcome> {
+	return db
+		.transaction(async (tx) => {
+			if (await findingsFrozen(tx, t.surveyId)) return { kind: 'frozen' as const };
+			const [survey] = await tx
+				.select({ id: surveys.id })
+				.from(surveys)
+				.where(and(eq(surveys.id, t.surveyId), eq(surveys.firmId, t.firmId)))
+				.limit(1);
+			if (!survey) return { kind: 'missing' as const };
+			// A step refuses by throwing (refuse), so whatever it wrote goes back.
+			const outcome = await step(tx);
+			await touchFirm(tx, t.firmId);
+			await recordChange(tx, {
+				firmId: t.firmId,
+				actorId: t.actorId,
+				entity: 'measure',
+				entityId: outcome.measureId,
+				action,
+				after: audit(outcome)
+			});
+			return outcome;
+		})
+		.catch((e: unknown) => {
+			if (e instanceof RolledBack) return e.outcome;
+			throw e;
+		});
+}
+
+class RolledBack extends Error {
+	constructor(readonly outcome: MeasureOutcome) {
+		super('rolled back');
+	}
+}
+
+/** Refuses inside a step: thrown so the transaction rolls back, returned by inSurvey. */
+const refuse = (outcome: MeasureOutcome): never => {
+	throw new RolledBack(outcome);
+};
+
+async function lockMeasure(tx: Tx, surveyId: string, measureId: string) {
+	const [row] = await tx
+		.select()
+		.from(measures)
+		.where(
+			and(eq(measures.id, measureId), eq(measures.surveyId, surveyId), isNull(measures.deletedAt))
+		)
+		.for('update');
+	return row ?? refuse({ kind: 'missing' });
+}
+
+/** Puts findings into a measure (taking them out of any other); all must be this survey's. */
+async function attach(tx: Tx, surveyId: string, measureId: string, ids: string[]) {
+	const unique = [...new Set(ids)];
+	const [result] = (await tx
+		.update(findings)
+		.set({ measureId })
+		.where(
+			and(inArray(findings.id, unique), eq(findings.surveyId, surveyId), isNull(findings.deletedAt))
+		)) as unknown as [{ affectedRows: number }];
+	if (result.affectedRows !== unique.length) {
+		refuse({ kind: 'foreign', count: unique.length - result.affectedRows });
+	}
+	return unique.length;
+}
+
+const columns = (d: MeasureDetails) => ({
+	name: d.name,
+	description: d.description,
+	accessCost: d.extras.access,
+	scaffoldCost: d.extras.scaffold,
+	shutdownCost: d.extras.shutdown,
+	otherCost: d.extras.other,
+	otherCostLabel: d.otherLabel
+});
+
+export function createMeasure(
+	db: Db,
+	t: MeasureTarget,
+	details: MeasureDetails,
+	findingIds: string[]
+): Promise<MeasureOutcome> {
+	const id = randomUUID();
+	return inSurvey(
+		db,
+		t,
+		'create',
+		async (tx) => {
+			const [{ n }] = await tx
+				.select({ n: sql<number>`COALESCE(MAX(${measures.sortOrder}), 0)` })
+				.from(measures)
+				.where(eq(measures.surveyId, t.surveyId));
+			await tx.insert(measures).values({
+				id,
+				surveyId: t.surveyId,
+				...columns(details),
+				sortOrder: Number(n) + 1,
+				createdBy: t.actorId
+			});
+			const count = findingIds.length ? await attach(tx, t.surveyId, id, findingIds) : 0;
+			return { kind: 'done' as const, measureId: id, findings: count };
+		},
+		(o) => ({ ...details, findingIds, findings: o.findings })
+	);
+}
+
+export function updateMeasure(
+	db: Db,
+	t: MeasureTarget,
+	measureId: string,
+	details: MeasureDetails
+): Promise<MeasureOutcome> {
+	let before: unknown;
+	return inSurvey(
+		db,
+		t,
+		'update',
+		async (tx) => {
+			before = await lockMeasure(tx, t.surveyId, measureId);
+			await tx
+				.update(measures)
+				.set({ ...columns(details), version: sql`${measures.version} + 1` })
+				.where(eq(measures.id, measureId));
+			return { kind: 'done' as const, measureId };
+		},
+		() => ({ before, after: details })
+	);
+}
+
+/** Adds findings to the measure (`op` add) or takes them out of it (`op` remove). */
+export function changeMembers(
+	db: Db,
+	t: MeasureTarget,
+	measureId: string,
+	op: 'add' | 'remove',
+	findingIds: string[]
+): Promise<MeasureOutcome> {
+	return inSurvey(
+		db,
+		t,
+		op === 'add' ? 'add-findings' : 'remove-findings',
+		async (tx) => {
+			await lockMeasure(tx, t.surveyId, measureId);
+			if (op === 'add') {
+				const count = await attach(tx, t.surveyId, measureId, findingIds);
+				return { kind: 'done' as const, measureId, findings: count };
+			}
+			const [result] = (await tx
+				.update(findings)
+				.set({ measureId: null })
+				.where(
+					and(inArray(findings.id, findingIds), eq(findings.measureId, measureId))
+				)) as unknown as [{ affectedRows: number }];
+			return { kind: 'done' as const, measureId, findings: result.affectedRows };
+		},
+		(o) => ({ findingIds, findings: o.findings })
+	);
+}
+
+/** Deletes the measure; its findings stay, no longer grouped. */
+export function deleteMeasure(
+	db: Db,
+	t: MeasureTarget,
+	measureId: string
+): Promise<MeasureOutcome> {
+	return inSurvey(
+		db,
+		t,
+		'delete',
+		async (tx) => {
+			await lockMeasure(tx, t.surveyId, measureId);
+			await tx.update(findings).set({ measureId: null }).where(eq(findings.measureId, measureId));
+			await tx.update(measures).set({ deletedAt: new Date() }).where(eq(measures.id, measureId));
+			return { kind: 'done' as const, measureId };
+		},
+		() => ({ deleted: true })
+	);
+}

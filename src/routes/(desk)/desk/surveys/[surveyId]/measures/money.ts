@@ -1,0 +1,28 @@
+/** Money, payback and rates as the measures pages show them. */
+import { formatMoney } from '$lib/components/walk/form/display';
+import { fromMinorUnits } from '$lib/steam';
+import { formatSignificant } from '$lib/units';
+
+export const money = (minor: number | null, currency: string) =>
+	minor === null ? '—' : formatMoney(fromMinorUnits(minor, currency), currency);
+
+export const years = (y: number | null) =>
+	y === null ? 'does not pay back' : `${formatSignificant(y)} years`;
+
+export const percent = (rate: number | null) =>
+	rate === null ? 'no single rate' : `${formatSignificant(rate * 100)} %`;
+
+/** The figures a savings cell reads (cellText), from a measure's sums. */
+export const chain = (
+	m: { steamKgH: number; fuelGj: number; co2Kg: number; waterM3: number; annualSaving: number },
+	currency: string
+) => ({
+	currency,
+	steamKgH: m.steamKgH,
+	heatKw: null,
+	fuelGjYear: m.fuelGj,
+	co2KgYear: m.co2Kg,
+	waterM3Year: m.waterM3,
+	costMinor: m.annualSaving,
+	repairCostMinor: null
+});
