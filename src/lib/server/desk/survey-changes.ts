@@ -16,6 +16,7 @@ import { db } from '../db';
 import { findings, sites, surveyAuditors, surveys } from '../db/schema';
 import type { Tx } from '../db/types';
 import { DESK_LOCKED_MESSAGE, lockedStage } from '../publish/lock';
+import { lockSurvey as lockedSurvey } from '../publish/publish';
 import { nextChangeSeq, unassignAuditor } from '../sync/counter';
 import { assignablePeople } from './surveys';
 import { stageMoveProblem } from './survey-stage';
@@ -27,11 +28,7 @@ export type Outcome =
 const refuse = (message: string, field?: string): Outcome => ({ ok: false, message, field });
 
 async function lockSurvey(tx: Tx, firmId: string, surveyId: string) {
-	const [row] = await tx
-		.select()
-		.from(surveys)
-		.where(and(eq(surveys.id, surveyId), eq(surveys.firmId, firmId)))
-		.for('update');
+	const row = await lockedSurvey(tx, firmId, surveyId);
 	if (!row) error(404, 'Not found.');
 	return row;
 }

@@ -44,7 +44,8 @@ class Refused extends Error {
 	}
 }
 
-async function lockSurvey(tx: Tx, firmId: string, surveyId: string) {
+/** The firm's survey row locked for update inside `tx`, or null when there is none. */
+export async function lockSurvey(tx: Tx, firmId: string, surveyId: string) {
 	const [row] = await tx
 		.select()
 		.from(surveys)

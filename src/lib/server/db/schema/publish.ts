@@ -14,23 +14,10 @@ import { at, createdAt, id, money, uuid, word } from './columns';
 import { costBases } from './sites';
 import { surveys } from './surveys';
 import { users } from './tenancy';
+import type { SavingsTotals } from '../../savings/totals';
 
-/** The totals of a published revision as they stood (SavingsTotals of $lib/server/savings). */
-export interface RevisionTotals {
-	count: number;
-	steamKgH: number;
-	heatKw: number;
-	fuelGjYear: number;
-	costMinor: number;
-	co2KgYear: number;
-	waterM3Year: number;
-	repairCostMinor: number;
-	withoutRepairCost: number;
-	paybackYears: number | null;
-	currency: string;
-	outOfDate: number;
-	withoutFigures: number;
-}
+/** The totals of a published revision as they stood: the savings list's totals, frozen. */
+export type RevisionTotals = SavingsTotals;
 
 /**
  * One publication of a survey to its client company (docs/publishing.md): revision 1 is the
