@@ -16,7 +16,7 @@ import { db } from '../db';
 import { findings, sites, surveyAuditors, surveys } from '../db/schema';
 import type { Tx } from '../db/types';
 import { DESK_LOCKED_MESSAGE, lockedStage } from '../publish/lock';
-import { lockSurvey as lockedSurvey } from '../publish/publish';
+import { bumpSurvey, lockSurvey as lockedSurvey } from '../survey-row';
 import { nextChangeSeq, unassignAuditor } from '../sync/counter';
 import { assignablePeople } from './surveys';
 import { stageMoveProblem } from './survey-stage';
@@ -31,11 +31,6 @@ async function lockSurvey(tx: Tx, firmId: string, surveyId: string) {
 	const row = await lockedSurvey(tx, firmId, surveyId);
 	if (!row) error(404, 'Not found.');
 	return row;
-}
-
-/** The survey moves on in the firm's feed: devices pull it again (docs/sync.md). */
-async function bump(tx: Tx, firmId: string) {
-	return { version: sql`${surveys.version} + 1`, changeSeq: await nextChangeSeq(tx, firmId) };
 }
 
 /** Every id one of the firm's active auditors or consultants, else the refusal to show. */
@@ -101,7 +96,7 @@ export function saveDetails(
 		}
 		await tx
 			.update(surveys)
-			.set({ ...input, ...(await bump(tx, actor.firmId)) })
+			.set({ ...input, ...(await bumpSurvey(tx, actor.firmId)) })
 			.where(eq(surveys.id, row.id));
 		await recordChange(tx, {
 			firmId: actor.firmId,
@@ -144,7 +139,7 @@ export function moveStage(actor: SessionUser, surveyId: string, to: SurveyStage)
 			.set({
 				status: to,
 				...(unreview ? { reviewedAt: null, reviewedBy: null } : {}),
-				...(await bump(tx, actor.firmId))
+				...(await bumpSurvey(tx, actor.firmId))
 			})
 			.where(eq(surveys.id, row.id));
 		await recordChange(tx, {
@@ -180,7 +175,7 @@ export function assign(actor: SessionUser, surveyId: string, ids: string[]): Pro
 		await tx.insert(surveyAuditors).values(fresh.map((userId) => ({ surveyId: row.id, userId })));
 		await tx
 			.update(surveys)
-			.set(await bump(tx, actor.firmId))
+			.set(await bumpSurvey(tx, actor.firmId))
 			.where(eq(surveys.id, row.id));
 		await recordChange(tx, {
 			firmId: actor.firmId,

@@ -22,7 +22,7 @@ import type { Db, Tx } from '../db/types';
 import { surveyPricing } from '../desk/findings-query';
 import { freezeSurveyBasis } from '../pricing/cost-basis';
 import { savingsTotals } from '../savings/totals';
-import { nextChangeSeq } from '../sync/counter';
+import { bumpSurvey, lockSurvey } from '../survey-row';
 import { notifyClient, type Notified } from './notify';
 import { publishProblem, type Problem } from './readiness';
 import { writeSnapshot } from './snapshot';
@@ -42,16 +42,6 @@ class Refused extends Error {
 	constructor(readonly problem: Problem) {
 		super(problem.message);
 	}
-}
-
-/** The firm's survey row locked for update inside `tx`, or null when there is none. */
-export async function lockSurvey(tx: Tx, firmId: string, surveyId: string) {
-	const [row] = await tx
-		.select()
-		.from(surveys)
-		.where(and(eq(surveys.id, surveyId), eq(surveys.firmId, firmId)))
-		.for('update');
-	return row ?? null;
 }
 
 async function lastRevision(tx: Tx, surveyId: string): Promise<number> {
@@ -135,8 +125,7 @@ export async function publishSurvey(
 				.set({
 					status: 'published',
 					publishedAt: now,
-					version: sql`${surveys.version} + 1`,
-					changeSeq: await nextChangeSeq(tx, actor.firmId)
+					...(await bumpSurvey(tx, actor.firmId))
 				})
 				.where(eq(surveys.id, row.id));
 			await recordChange(tx, {
@@ -196,8 +185,7 @@ export async function openCorrection(
 			.update(surveys)
 			.set({
 				status: 'in-review',
-				version: sql`${surveys.version} + 1`,
-				changeSeq: await nextChangeSeq(tx, actor.firmId)
+				...(await bumpSurvey(tx, actor.firmId))
 			})
 			.where(eq(surveys.id, row.id));
 		await recordChange(tx, {

@@ -21,6 +21,7 @@ import type { UnitSystemId } from '../../units';
 import { unitSystemOf } from '../walk/person';
 import { clientRecipients, type Recipient } from './notify';
 import { publishProblem } from './readiness';
+import { savingSnapshotSql } from './snapshot';
 
 export interface Revision {
 	number: number;
@@ -195,7 +196,7 @@ export async function ladderSurvey(
 			co2KgYear: S.co2
 		})
 		.from(S)
-		.where(and(eq(S.revisionId, rev.id), eq(S.figuresCurrent, 1), sql`${S.cost} > 0`))
+		.where(savingSnapshotSql(rev.id))
 		.orderBy(desc(S.cost), asc(S.findingId))
 		.limit(limit);
 	return {

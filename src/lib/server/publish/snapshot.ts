@@ -3,7 +3,7 @@
  * figure columns, repair cost, payback and measure, copied in one INSERT … SELECT (no row passes
  * through Node, so 100,000 findings cost one statement), inside the publishing transaction.
  */
-import { and, eq, isNull, sql } from 'drizzle-orm';
+import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import { areas, assets, findings as F, headers, surveyRevisionFindings } from '../db/schema';
 import type { Tx } from '../db/types';
 import { figuresCurrentSql } from '../pricing/state';
@@ -50,3 +50,11 @@ export async function writeSnapshot(
 	);
 	return Number((result as { affectedRows?: number }).affectedRows ?? 0);
 }
+
+/** A revision's rows the savings list would have listed: current on its basis, saving. */
+export const savingSnapshotSql = (revisionId: string) =>
+	and(
+		eq(surveyRevisionFindings.revisionId, revisionId),
+		eq(surveyRevisionFindings.figuresCurrent, 1),
+		gt(surveyRevisionFindings.cost, 0)
+	)!;

@@ -16,6 +16,7 @@ import type { SavingsItem } from '../savings/ranked-list';
 import { savingFindingSql, savingsItem, type ItemColumns } from '../savings/ranked-list';
 import { into, type SavingsBreakdown, type SavingsGroup } from '../savings/totals';
 import type { ReportContent } from './content';
+import { savingSnapshotSql } from '../publish/snapshot';
 
 /** One ranked row of a report: the savings list's item, and the version it was published at. */
 export interface ReportRow extends SavingsItem {
@@ -75,10 +76,6 @@ function livePage(db: Executor, content: ReportContent, c: Cursor, size: number)
 		.orderBy(...order(F.cost, F.id, c))
 		.limit(size);
 }
-
-/** The snapshot's rows the savings list would have listed: current on its basis, saving. */
-const savingSnapshotSql = (revisionId: string) =>
-	and(eq(S.revisionId, revisionId), eq(S.figuresCurrent, 1), gt(S.cost, 0))!;
 
 function revisionPage(db: Executor, revisionId: string, c: Cursor, size: number) {
 	return db
