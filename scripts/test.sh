@@ -57,7 +57,18 @@ node -e '
 	// A file that failed to load has no tests in it: count it as a failure.
 	const broken = r.testResults.filter((f) => f.status === "failed" && f.assertionResults.length === 0).length;
 	require("fs").writeFileSync(process.argv[2], JSON.stringify({ passed: r.numPassedTests, failed: r.numFailedTests + broken, skipped }));
-' "$REPORTS/vitest.json" "$REPORTS/vitest-counts.json"
+	// What failed, for the end of the run (the last lines are what a CI log shows first).
+	const lines = [];
+	for (const f of r.testResults) {
+		const file = require("path").relative(process.cwd(), f.name);
+		if (f.status === "failed" && f.assertionResults.length === 0) lines.push(`Vitest ${file}: ${(f.message || "failed to load").split("\n")[0]}`);
+		for (const a of f.assertionResults) {
+			if (a.status !== "failed") continue;
+			lines.push(`Vitest ${file} › ${a.fullName}: ${(a.failureMessages[0] || "").split("\n")[0].slice(0, 300)}`);
+		}
+	}
+	require("fs").writeFileSync(process.argv[3], lines.map((l) => l + "\n").join(""));
+' "$REPORTS/vitest.json" "$REPORTS/vitest-counts.json" "$REPORTS/failures.txt"
 add_counts "$REPORTS/vitest-counts.json"
 
 stage "build" node_modules/.bin/vite build --logLevel warn
@@ -70,9 +81,28 @@ node -e '
 	try { r = JSON.parse(fs.readFileSync(process.argv[1], "utf8")).stats; } catch { r = null; }
 	const out = r ? { passed: r.expected, failed: r.unexpected + r.flaky, skipped: r.skipped } : { passed: 0, failed: 1, skipped: 0 };
 	fs.writeFileSync(process.argv[2], JSON.stringify(out));
-' "$REPORTS/playwright.json" "$REPORTS/playwright-counts.json"
+	let report = null;
+	try { report = JSON.parse(fs.readFileSync(process.argv[1], "utf8")); } catch {}
+	const lines = [];
+	const walk = (suite, titles) => {
+		for (const s of suite.suites || []) walk(s, [...titles, s.title]);
+		for (const spec of suite.specs || []) {
+			for (const t of spec.tests || []) {
+				if (t.status === "expected" || t.status === "skipped") continue;
+				const err = (t.results || []).map((x) => x.error && x.error.message).find(Boolean) || t.status;
+				lines.push(`Playwright ${spec.file}:${spec.line} › ${[...titles, spec.title].filter(Boolean).join(" › ")}: ${String(err).split("\n")[0].slice(0, 300)}`);
+			}
+		}
+	};
+	if (report) for (const s of report.suites || []) walk(s, []);
+	fs.appendFileSync(process.argv[3], lines.map((l) => l + "\n").join(""));
+' "$REPORTS/playwright.json" "$REPORTS/playwright-counts.json" "$REPORTS/failures.txt"
 add_counts "$REPORTS/playwright-counts.json"
 
+if [ -s "$REPORTS/failures.txt" ]; then
+	say "── What failed"
+	cat "$REPORTS/failures.txt"
+fi
 summary="$passed passed, $failed failed"
 [ "$skipped" -gt 0 ] && summary="$summary, $skipped skipped"
 echo "$summary"

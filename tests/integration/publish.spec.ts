@@ -24,12 +24,16 @@ import { DEVICE_LOCKED_REASON } from '../../src/lib/server/publish/lock';
 import { clientRecipients } from '../../src/lib/server/publish/notify';
 import { openCorrection, publishSurvey } from '../../src/lib/server/publish/publish';
 import { ladderSurvey, publishPage } from '../../src/lib/server/publish/revisions';
-import { rankedSavings } from '../../src/lib/server/savings/ranked-savings';
 import { demoFirms } from '../../src/lib/server/seed/demo';
+import { createMeasure } from '../../src/lib/server/measures/write';
+import type { RankedSavings } from '../../src/lib/server/savings/ranked-savings';
+import { GET as savingsRoute } from '../../src/routes/api/surveys/[id]/savings/+server';
 import { testDatabase } from './db';
+import { liveSavings } from './live-savings';
 import { auditorA, clientA, consultantA, consultantB } from './demo-people';
 import { captureMail, linkIn, type MailCapture } from './mail-capture';
 import { batch, postPush, trapCapture, upsert as upsertOf } from './sync-api';
+import { call, type Handler } from './walk-api';
 
 const { pool, db } = testDatabase();
 const firmId = demoFirms[0].id;
@@ -75,6 +79,7 @@ async function cleanUp() {
 			.where(inArray(schema.appliedMutations.id, mutationIds));
 	}
 	await db.delete(schema.findings).where(eq(schema.findings.surveyId, survey));
+	await db.delete(schema.measures).where(eq(schema.measures.surveyId, survey));
 	await db.delete(schema.surveyAuditors).where(eq(schema.surveyAuditors.surveyId, survey));
 	await db.delete(schema.surveys).where(eq(schema.surveys.id, survey));
 	await db.update(schema.sites).set({ costBasisId: null }).where(eq(schema.sites.id, site));
@@ -94,6 +99,19 @@ const findingsOf = () =>
 		.select()
 		.from(schema.findings)
 		.where(and(eq(schema.findings.surveyId, survey), isNull(schema.findings.deletedAt)));
+const savingsCall = (user: SessionUser, query = '') =>
+	call(
+		savingsRoute as Handler,
+		'/api/surveys/[id]/savings',
+		user,
+		`/api/surveys/${survey}/savings?${query}`,
+		{ id: survey }
+	);
+const savingsOf = async (user: SessionUser, query = '') => {
+	const res = await savingsCall(user, query);
+	expect(res.status, JSON.stringify(res.body)).toBe(200);
+	return res.body as RankedSavings;
+};
 const stage = async () =>
 	(await db.select().from(schema.surveys).where(eq(schema.surveys.id, survey)))[0];
 
@@ -234,7 +252,7 @@ describe('publishing a survey', () => {
 
 	it('revision 1 freezes the figures and basis and tells the client by e-mail with a link', async () => {
 		const before = await surveyPricing(db, survey);
-		const list = await rankedSavings(db, before!, { rank: 'savings' });
+		const list = await liveSavings(db, survey);
 		const out = await publishSurvey(actor, survey, { note: '', origin: ORIGIN }, db);
 		expect(out.ok, JSON.stringify(out)).toBe(true);
 		if (!out.ok) return;
@@ -392,6 +410,52 @@ describe('a correction', () => {
 		);
 	});
 
+	it('while it is open the client’s savings list is revision 1, frozen; staff see the live correction', async () => {
+		const made = await createMeasure(
+			db,
+			{ firmId, actorId: consultantA.id, surveyId: survey },
+			{
+				name: 'Replace the two worst traps',
+				description: null,
+				extras: { access: 6_000, scaffold: 4_000, shutdown: 0, other: 0 },
+				otherLabel: null
+			},
+			(await findingsOf()).slice(0, 2).map((f) => f.id)
+		);
+		expect(made.kind).toBe('done');
+		const seen = await savingsOf(clientA);
+		expect(seen.figures.revision?.number).toBe(1);
+		expect(seen.figures.choice).toEqual({ kind: 'revision', number: 1, latest: true });
+		expect(seen.items.some((i) => i.location === 'Corrected at the desk')).toBe(false);
+		// Revision 1 had no measure: neither the new one nor its own costs reach the client.
+		expect(seen.measures).toEqual([]);
+		expect(seen.totals.extraCostMinor).toBe(0);
+		const [rev1] = await db
+			.select()
+			.from(schema.surveyRevisions)
+			.where(eq(schema.surveyRevisions.surveyId, survey));
+		expect(seen.totals.costMinor).toBe(rev1.totals.costMinor);
+
+		const staff = await savingsOf(consultantA);
+		expect(staff.figures.choice).toEqual({
+			kind: 'live',
+			marker: { state: 'correction', revision: 2 }
+		});
+		expect(staff.figures.words).toContain('correction in progress');
+		expect(staff.items.some((i) => i.location === 'Corrected at the desk')).toBe(true);
+		expect(staff.measures.map((m) => [m.name, m.findings, m.extraCost])).toEqual([
+			['Replace the two worst traps', 2, 10_000]
+		]);
+		expect(staff.totals.extraCostMinor).toBe(10_000);
+		expect(staff.totals.investmentMinor).toBe(staff.totals.repairCostMinor + 10_000);
+		// Staff may ask for the published revision by its number; a revision never published is refused.
+		const asked = await savingsOf(consultantA, 'revision=1');
+		expect(asked.items.map((i) => i.id)).toEqual(seen.items.map((i) => i.id));
+		const missing = await savingsCall(consultantA, 'revision=2');
+		expect(missing.status).toBe(404);
+		expect(JSON.stringify(missing.body)).toContain('no published revision 2');
+	});
+
 	it('needs a note of what changed, then publishes as revision 2 and says so in the e-mail', async () => {
 		const bare = await publishSurvey(actor, survey, { note: '   ', origin: ORIGIN }, db);
 		expect(bare).toMatchObject({ ok: false, field: 'note', message: NOTE_REQUIRED });
@@ -417,5 +481,21 @@ describe('a correction', () => {
 		const page = await publishPage(consultantA, survey, db);
 		expect(page?.revisions.map((r) => r.number)).toEqual([2, 1]);
 		expect(page?.revisions[0].note).toBe('One trap’s location corrected and its repair quoted.');
+		// Revision 2 carries the measure as it stood, with its own costs in the investment.
+		const client = await savingsOf(clientA);
+		expect(client.figures.revision?.number).toBe(2);
+		const [m] = client.measures;
+		expect([m.name, m.findings, m.extraCost, m.rank]).toEqual([
+			'Replace the two worst traps',
+			2,
+			10_000,
+			1
+		]);
+		expect(m.cost).toBe(m.repairCost + 10_000);
+		expect(client.totals.extraCostMinor).toBe(10_000);
+		expect(client.totals.paybackYears).toBeCloseTo(
+			(client.totals.repairCostMinor + 10_000) / client.totals.costMinor,
+			12
+		);
 	});
 });

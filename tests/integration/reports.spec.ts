@@ -14,11 +14,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CostBasis } from '../../src/lib/schemas/site';
 import { moneyText } from '../../src/lib/components/savings/money';
 import * as schema from '../../src/lib/server/db/schema';
-import { surveyPricing } from '../../src/lib/server/desk/findings-query';
 import { openCorrection, publishSurvey } from '../../src/lib/server/publish/publish';
 import { reportContent } from '../../src/lib/server/reports/content';
 import { reportRows } from '../../src/lib/server/reports/rows';
-import { rankedSavings } from '../../src/lib/server/savings/ranked-savings';
 import { demoFirms } from '../../src/lib/server/seed/demo';
 import { touchFirm } from '../../src/lib/server/sync/counter';
 import { GET as csvRoute } from '../../src/routes/api/surveys/[id]/findings.csv/+server';
@@ -27,6 +25,7 @@ import { GET as pdfRoute } from '../../src/routes/api/surveys/[id]/report.pdf/+s
 import { insertBenchFindings } from '../../scripts/bench-desk-rows';
 import { pdfPages } from '../support/pdf-text';
 import { testDatabase } from './db';
+import { liveSavings } from './live-savings';
 import { auditorA, clientA, clientB, consultantA, consultantB } from './demo-people';
 import { routeEvent, type Handler } from './walk-api';
 
@@ -218,8 +217,7 @@ const sumMinor = (values: (string | number | null)[]) =>
 	);
 
 async function liveList() {
-	const pricing = await surveyPricing(db, survey);
-	return rankedSavings(db, pricing!, { rank: 'savings' });
+	return liveSavings(db, survey);
 }
 
 async function xlsxSheet(user: SessionUser, query = '') {

@@ -144,6 +144,7 @@ const row = (p: Planned, surveyId = survey) => ({
 async function cleanUp() {
 	const surveys = [survey, otherSurvey, bigSurvey];
 	await db.delete(schema.findings).where(inArray(schema.findings.surveyId, surveys));
+	await db.delete(schema.measures).where(inArray(schema.measures.surveyId, surveys));
 	await db.delete(schema.surveys).where(inArray(schema.surveys.id, surveys));
 	await db.update(schema.sites).set({ costBasisId: null }).where(eq(schema.sites.id, site));
 	await db.delete(schema.costBases).where(eq(schema.costBases.siteId, site));
@@ -482,6 +483,107 @@ describe('kept lists and the cut at 5,000', () => {
 	});
 });
 
+describe('measures in the list', () => {
+	const measureIds = [id(7, 1), id(7, 2), id(7, 3)];
+	/** Which planned findings each measure holds (current savers, a non-saver, a deleted one). */
+	const members = [
+		savers.slice(0, 3).map((p) => p.id),
+		[savers[3].id, plan.find((p) => p.cost === 0)!.id],
+		[deletedId]
+	];
+	const extras = [
+		{ accessCost: 9_000, scaffoldCost: 30_000 },
+		{ accessCost: 0, scaffoldCost: 0, otherCost: 1_500 },
+		{ shutdownCost: 50_000 }
+	];
+
+	beforeAll(async () => {
+		await db.insert(schema.measures).values(
+			measureIds.map((mid, k) => ({
+				id: mid,
+				surveyId: survey,
+				name: `Job ${k + 1}`,
+				sortOrder: k,
+				...extras[k]
+			}))
+		);
+		for (const [k, ids] of members.entries()) {
+			await db
+				.update(schema.findings)
+				.set({ measureId: measureIds[k] })
+				.where(inArray(schema.findings.id, ids));
+		}
+		await touchFirm(db, firmId);
+	});
+	afterAll(async () => {
+		await db
+			.update(schema.findings)
+			.set({ measureId: null })
+			.where(inArray(schema.findings.measureId, measureIds));
+		await db.delete(schema.measures).where(inArray(schema.measures.id, measureIds));
+		await touchFirm(db, firmId);
+	});
+
+	/** A measure's sums written out from the plan: its live findings' figures, its own costs. */
+	const expected = (k: number) => {
+		const held = plan.filter((p) => members[k].includes(p.id));
+		const saving = held.reduce((t, p) => t + (p.cost ?? 0), 0);
+		const repairs = held.reduce((t, p) => t + (p.repair ?? 0), 0);
+		const co2 = held.reduce((t, p) => t + (p.co2 ?? 0), 0);
+		const own = Object.values(extras[k]).reduce((t, v) => t + v, 0);
+		const cost = repairs + own;
+		return { saving, cost, co2, payback: saving > 0 ? cost / saving : null, own };
+	};
+
+	it('lists each measure with its findings’ sums and its own costs, in each order', async () => {
+		for (const rank of SAVINGS_RANKS) {
+			const body = await list(`rank=${rank}`);
+			// The third holds only a deleted finding: listed, nothing saved, its own shutdown cost.
+			expect(body.measures).toHaveLength(3);
+			for (const m of body.measures) {
+				const k = measureIds.indexOf(m.id);
+				const e = expected(k);
+				expect(m.annualSaving, m.name).toBe(e.saving);
+				expect(m.extraCost, m.name).toBe(e.own);
+				expect(m.cost, m.name).toBe(e.cost);
+				if (e.payback === null) expect(m.paybackYears).toBeNull();
+				else expect(m.paybackYears, m.name).toBeCloseTo(e.payback, 12);
+			}
+			expect(body.measures.map((m) => m.rank)).toEqual([1, 2, 3]);
+			const shown = body.measures.map((m) => measureIds.indexOf(m.id));
+			const order = [...[0, 1, 2]].sort((a, b) => {
+				const [x, y] = [expected(a), expected(b)];
+				if (rank === 'payback') {
+					if (x.payback === null) return 1;
+					if (y.payback === null) return -1;
+					return x.payback - y.payback;
+				}
+				return rank === 'savings' ? y.saving - x.saving : y.co2 - x.co2;
+			});
+			expect(shown, rank).toEqual(order);
+			// Items say which measure they are repaired in.
+			for (const item of body.items) {
+				const k = members.findIndex((ids) => ids.includes(item.id));
+				expect(item.measureId, item.id).toBe(k === -1 ? null : measureIds[k]);
+			}
+		}
+	});
+
+	it('counts the measures’ own costs in the investment and the payback of the whole', async () => {
+		const body = await list('rank=savings');
+		// Measures that hold a live finding count; the one holding only a deleted finding does not.
+		const own = expected(0).own + expected(1).own;
+		expect(body.totals.extraCostMinor).toBe(own);
+		expect(body.totals.investmentMinor).toBe(body.totals.repairCostMinor + own);
+		expect(body.totals.paybackYears).toBeCloseTo(
+			(body.totals.repairCostMinor + own) / body.totals.costMinor,
+			12
+		);
+		// The Pareto axis stays the findings’ own repairs.
+		expect(body.items.at(-1)!.cumulativeRepairCostMinor).toBe(body.totals.repairCostMinor);
+	});
+});
+
 describe('GET /api/surveys/[id]/savings: parameters and who may see it', () => {
 	it('refuses a rank it does not know, an unknown parameter and a repeated one, in words', async () => {
 		expect(await get('rank=cheapest')).toMatchObject({
@@ -490,7 +592,7 @@ describe('GET /api/surveys/[id]/savings: parameters and who may see it', () => {
 		});
 		expect(await get('rank=savings&page=2')).toMatchObject({
 			status: 400,
-			body: { message: 'Unknown parameter page: the savings list takes only rank' }
+			body: { message: 'Unknown parameter page: the savings list takes only rank and revision' }
 		});
 		expect(await get('rank=savings&rank=co2')).toMatchObject({
 			status: 400,

@@ -6,16 +6,17 @@
 import { z } from 'zod';
 import { readQueryString } from './query-string';
 
+/** `?revision=N`: a published revision's number (the savings list takes it too). */
+export const revisionParam = z
+	.string()
+	.regex(/^[1-9][0-9]{0,5}$/, {
+		error: 'revision must be the number of a published revision: a whole number from 1'
+	})
+	.transform(Number)
+	.optional();
+
 export const reportQuerySchema = z.strictObject(
-	{
-		revision: z
-			.string()
-			.regex(/^[1-9][0-9]{0,5}$/, {
-				error: 'revision must be the number of a published revision: a whole number from 1'
-			})
-			.transform(Number)
-			.optional()
-	},
+	{ revision: revisionParam },
 	{
 		error: (issue) =>
 			issue.code === 'unrecognized_keys'

@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { readQueryString } from './query-string';
+import { revisionParam } from './reports';
 
 /** savings: annual saving, biggest first; payback: shortest first; co2: most CO2 avoided first. */
 export const SAVINGS_RANKS = ['savings', 'payback', 'co2'] as const;
@@ -22,12 +23,13 @@ export const savingsQuerySchema = z.strictObject(
 	{
 		rank: z
 			.enum(SAVINGS_RANKS, { error: `rank must be one of: ${SAVINGS_RANKS.join(', ')}` })
-			.default('savings')
+			.default('savings'),
+		revision: revisionParam
 	},
 	{
 		error: (issue) =>
 			issue.code === 'unrecognized_keys'
-				? `Unknown parameter ${issue.keys.join(', ')}: the savings list takes only rank`
+				? `Unknown parameter ${issue.keys.join(', ')}: the savings list takes only rank and revision`
 				: undefined
 	}
 );

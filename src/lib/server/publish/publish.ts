@@ -25,7 +25,7 @@ import { savingsTotals } from '../savings/totals';
 import { bumpSurvey, lockSurvey } from '../survey-row';
 import { notifyClient, type Notified } from './notify';
 import { publishProblem, type Problem } from './readiness';
-import { writeSnapshot } from './snapshot';
+import { writeMeasuresSnapshot, writeSnapshot } from './snapshot';
 
 export interface Actor {
 	id: string;
@@ -116,6 +116,7 @@ export async function publishSurvey(
 				findingCount: 0
 			});
 			const copied = await writeSnapshot(tx, revisionId, row.id, basisId);
+			await writeMeasuresSnapshot(tx, revisionId, row.id);
 			await tx
 				.update(surveyRevisions)
 				.set({ findingCount: copied })

@@ -22,8 +22,9 @@ export interface SavingsPage {
 export async function savingsPage(
 	userId: string,
 	surveyId: string,
-	rank: SavingsRank
-): Promise<SavingsPage | null> {
+	rank: SavingsRank,
+	revision?: number
+): Promise<SavingsPage | { missing: string } | null> {
 	const [[survey], unitSystem, list] = await Promise.all([
 		db
 			.select({
@@ -36,8 +37,9 @@ export async function savingsPage(
 			.where(eq(surveys.id, surveyId))
 			.limit(1),
 		unitSystemOf(db, userId),
-		surveySavings(surveyId, rank)
+		surveySavings(surveyId, 'staff', rank, revision)
 	]);
 	if (!survey || !list) return null;
-	return { survey, unitSystem, list };
+	if (!list.ok) return { missing: list.message };
+	return { survey, unitSystem, list: list.list };
 }

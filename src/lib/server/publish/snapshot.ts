@@ -4,7 +4,15 @@
  * through Node, so 100,000 findings cost one statement), inside the publishing transaction.
  */
 import { and, eq, gt, isNull, sql } from 'drizzle-orm';
-import { areas, assets, findings as F, headers, surveyRevisionFindings } from '../db/schema';
+import {
+	areas,
+	assets,
+	findings as F,
+	headers,
+	measures as M,
+	surveyRevisionFindings,
+	surveyRevisionMeasures
+} from '../db/schema';
 import type { Tx } from '../db/types';
 import { figuresCurrentSql } from '../pricing/state';
 
@@ -47,6 +55,36 @@ export async function writeSnapshot(
 			.leftJoin(areas, eq(areas.id, F.areaId))
 			.leftJoin(headers, eq(headers.id, F.headerId))
 			.where(and(eq(F.surveyId, surveyId), isNull(F.deletedAt)))
+	);
+	return Number((result as { affectedRows?: number }).affectedRows ?? 0);
+}
+
+/**
+ * Copies the survey's live measures (names, descriptions, their own costs) into the revision,
+ * beside its findings' snapshot; returns how many.
+ */
+export async function writeMeasuresSnapshot(
+	tx: Tx,
+	revisionId: string,
+	surveyId: string
+): Promise<number> {
+	const [result] = await tx.insert(surveyRevisionMeasures).select(
+		tx
+			.select({
+				revisionId: sql<string>`${revisionId}`.as('revision_id'),
+				measureId: M.id,
+				name: M.name,
+				description: M.description,
+				accessCost: M.accessCost,
+				scaffoldCost: M.scaffoldCost,
+				shutdownCost: M.shutdownCost,
+				otherCost: M.otherCost,
+				otherCostLabel: M.otherCostLabel,
+				sortOrder: M.sortOrder,
+				createdAt: M.createdAt
+			})
+			.from(M)
+			.where(and(eq(M.surveyId, surveyId), isNull(M.deletedAt)))
 	);
 	return Number((result as { affectedRows?: number }).affectedRows ?? 0);
 }

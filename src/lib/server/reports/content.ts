@@ -1,21 +1,20 @@
 /**
  * What a survey's report says, before it is drawn (docs/reports.md): the survey, its site,
- * client and firm, which figures (choose.ts), the totals and breakdown of the ranked list those
- * figures make, and — paged from SQL, never all at once — its ranked rows (rows.ts). The PDF,
- * the XLSX and the CSV all read this, so their totals are the same by construction. A
- * "measures" section is a field to add here and a section for the PDF renderer.
+ * client and firm, which figures with their totals, breakdown and measures (publish/figures.ts, shared with the
+ * ranked savings list), and — paged from SQL, never all at once — its ranked rows (rows.ts).
+ * The PDF, the XLSX and the CSV all read this, so their totals are the same by construction.
  */
-import { desc, eq } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { UnitSystemId } from '../../units';
 import { isUnitSystemId } from '../../units';
-import { clientCompanies, firms, sites, surveyRevisions, surveys } from '../db/schema';
+import { clientCompanies, firms, sites, surveys } from '../db/schema';
 import type { Executor } from '../db/types';
 import { atmosphereOf } from '../desk/finding-detail';
-import { surveyPricing } from '../desk/findings-query';
-import { wholeEconomics, type WholeEconomics } from '../savings/ranked-savings';
-import { savingsTotals, type SavingsBreakdown, type SavingsTotals } from '../savings/totals';
-import { chooseFigures, type FigureChoice, type Reader } from './choose';
-import { revisionBreakdown } from './rows';
+import type { MeasureRow } from '../measures/sums';
+import type { FigureChoice, Reader } from '../publish/choose';
+import { chosenFigures, type ChosenRevision } from '../publish/figures';
+import type { WholeEconomics } from '../savings/ranked-savings';
+import type { SavingsBreakdown, SavingsTotals } from '../savings/totals';
 
 export interface ReportSurvey {
 	id: string;
@@ -35,13 +34,7 @@ export interface ReportSurvey {
 	atmosphere: number;
 }
 
-export interface ReportRevision {
-	id: string;
-	number: number;
-	publishedAt: Date;
-	note: string | null;
-	costBasisId: string | null;
-}
+export type ReportRevision = ChosenRevision;
 
 export interface ReportContent {
 	survey: ReportSurvey;
@@ -53,6 +46,8 @@ export interface ReportContent {
 	currency: string;
 	totals: SavingsTotals & { economics: WholeEconomics | null };
 	breakdown: SavingsBreakdown;
+	/** The measures of those figures (their findings, own costs, sums, payback). */
+	measures: MeasureRow[];
 	generatedAt: Date;
 }
 
@@ -102,66 +97,25 @@ export async function reportContent(
 	reader: Reader,
 	asked?: number
 ): Promise<ContentOutcome | null> {
-	const [survey, revisions, pricing] = await Promise.all([
+	const [survey, chosen] = await Promise.all([
 		reportSurvey(db, surveyId),
-		db
-			.select({
-				id: surveyRevisions.id,
-				number: surveyRevisions.number,
-				publishedAt: surveyRevisions.publishedAt,
-				note: surveyRevisions.note,
-				costBasisId: surveyRevisions.costBasisId,
-				totals: surveyRevisions.totals
-			})
-			.from(surveyRevisions)
-			.where(eq(surveyRevisions.surveyId, surveyId))
-			.orderBy(desc(surveyRevisions.number)),
-		surveyPricing(db, surveyId)
+		chosenFigures(db, surveyId, reader, asked)
 	]);
-	if (!survey || !pricing) return null;
-	const chosen = chooseFigures({
-		reader,
-		stage: survey.stage,
-		publishedAt: survey.publishedAt,
-		revisions: revisions.map((r) => r.number),
-		...(asked === undefined ? {} : { asked })
-	});
+	if (!survey || !chosen) return null;
 	if (!chosen.ok) return chosen;
-	const { choice } = chosen;
-	const generatedAt = new Date();
-	if (choice.kind === 'revision') {
-		const { totals: frozen, ...revision } = revisions.find((r) => r.number === choice.number)!;
-		const [breakdown, economics] = await Promise.all([
-			revisionBreakdown(db, revision.id),
-			wholeEconomics(db, revision.costBasisId, frozen)
-		]);
-		return {
-			ok: true,
-			content: {
-				survey,
-				choice,
-				revision,
-				basisId: revision.costBasisId,
-				currency: frozen.currency,
-				totals: { ...frozen, economics },
-				breakdown,
-				generatedAt
-			}
-		};
-	}
-	const { totals, breakdown } = await savingsTotals(db, pricing);
-	const economics = await wholeEconomics(db, pricing.basisId, totals);
+	const { choice, revision, basisId, currency, totals, breakdown, measures } = chosen.figures;
 	return {
 		ok: true,
 		content: {
 			survey,
 			choice,
-			revision: null,
-			basisId: pricing.basisId,
-			currency: pricing.currency,
-			totals: { ...totals, economics },
+			revision,
+			basisId,
+			currency,
+			totals,
 			breakdown,
-			generatedAt
+			measures,
+			generatedAt: new Date()
 		}
 	};
 }

@@ -8,7 +8,7 @@ import ExcelJS from 'exceljs';
 import type { PassThrough } from 'node:stream';
 import { minorUnitDigits } from '../../steam';
 import type { Executor } from '../db/types';
-import { choiceWords } from './choose';
+import { choiceWords } from '../publish/choose';
 import { exportColumns, type ExportColumn } from './columns';
 import type { ReportContent } from './content';
 import { CSV_BOM, csvNumber, csvRecord } from './csv';

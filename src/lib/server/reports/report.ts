@@ -1,6 +1,6 @@
 /**
  * A survey's reports as the routes serve them (docs/reports.md): the content for the person
- * asking (which figures: choose.ts), then a streamed body — the PDF, the XLSX or the CSV — read
+ * asking (which figures: publish/choose.ts), then a streamed body — the PDF, the XLSX or the CSV — read
  * from the database a page of rows at a time while the download runs.
  */
 import { MAX_SAVINGS_ITEMS } from '../../schemas/savings';

@@ -11,10 +11,8 @@
 import { and, asc, desc, eq, gt, lt, sql, type AnyColumn } from 'drizzle-orm';
 import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
 import type { Executor } from '../db/types';
-import { kindWords } from '../finding-words';
 import type { SavingsItem } from '../savings/ranked-list';
 import { savingFindingSql, savingsItem, type ItemColumns } from '../savings/ranked-list';
-import { into, type SavingsBreakdown, type SavingsGroup } from '../savings/totals';
 import type { ReportContent } from './content';
 import { savingSnapshotSql } from '../publish/snapshot';
 
@@ -66,6 +64,7 @@ function livePage(db: Executor, content: ReportContent, c: Cursor, size: number)
 			waterM3Year: F.water,
 			repairCostMinor: F.repairCost,
 			paybackYears: F.paybackYears,
+			measureId: F.measureId,
 			publishedVersion: sql<number | null>`NULL`
 		})
 		.from(F)
@@ -96,6 +95,7 @@ function revisionPage(db: Executor, revisionId: string, c: Cursor, size: number)
 			waterM3Year: S.water,
 			repairCostMinor: S.repairCost,
 			paybackYears: S.paybackYears,
+			measureId: S.measureId,
 			publishedVersion: S.findingVersion
 		})
 		.from(S)
@@ -154,44 +154,3 @@ export async function* reportRows(
 /** The ranking's order: cost DESC, then id ASC (ids are lower-case ASCII, so code-unit order). */
 const ranked = (a: Raw, b: Raw) =>
 	Number(b.costMinor) - Number(a.costMinor) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
-
-const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
-	b.costMinor - a.costMinor || a.label.localeCompare(b.label);
-
-/** The breakdown by kind and area of a revision's snapshot (as savingsTotals groups live ones). */
-export async function revisionBreakdown(
-	db: Executor,
-	revisionId: string
-): Promise<SavingsBreakdown> {
-	const groups = await db
-		.select({
-			kind: S.kind,
-			areaId: S.areaId,
-			area: S.areaName,
-			count: sql<string | number>`COUNT(*)`,
-			cost: sql<string | number | null>`SUM(${S.cost})`,
-			repair: sql<string | number | null>`SUM(${S.repairCost})`,
-			co2: sql<string | number | null>`SUM(${S.co2})`
-		})
-		.from(S)
-		.where(savingSnapshotSql(revisionId))
-		.groupBy(S.kind, S.areaId, S.areaName);
-	const fold = (
-		key: (g: (typeof groups)[number]) => string | null,
-		label: (g: (typeof groups)[number]) => string
-	) => {
-		const map = new Map<string | null, SavingsGroup>();
-		for (const g of groups) into(map, key(g), label(g), g);
-		return [...map.values()].sort(bySaving);
-	};
-	return {
-		kind: fold(
-			(g) => g.kind,
-			(g) => kindWords(g.kind)
-		),
-		area: fold(
-			(g) => g.areaId,
-			(g) => g.area ?? 'No area'
-		)
-	};
-}

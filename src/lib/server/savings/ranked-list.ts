@@ -5,10 +5,11 @@
  * the survey's findings into Node. At most MAX_SAVINGS_ITEMS rows come back; the running sums
  * are over the whole ranking, so the last row listed still carries the true cumulative.
  */
-import { and, asc, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, isNull, sql, type AnyColumn, type SQL } from 'drizzle-orm';
 import { MAX_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
 import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
-import { areas, assets, findings as F, headers } from '../db/schema';
+import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
+import { savingSnapshotSql } from '../publish/snapshot';
 import type { Executor } from '../db/types';
 import { figuresCurrentSql } from '../pricing/state';
 import { conditionWords, kindWords, statusWords } from '../finding-words';
@@ -44,6 +45,8 @@ export interface SavingsItem {
 	repairCostMinor: number | null;
 	/** Simple payback, years; null without a repair cost. */
 	paybackYears: number | null;
+	/** The measure it is repaired in, or null. */
+	measureId: string | null;
 	/** Saving per year of this item and every item ranked above it, minor units. */
 	cumulativeSavingMinor: number;
 	/** Known repair costs of this item and every item ranked above it, minor units. */
@@ -62,20 +65,49 @@ export const savingFindingSql = (surveyId: string, basisId: string | null): SQL 
 		gt(F.cost, 0)
 	)!;
 
+/** The columns a ranking orders by and sums: the findings' or a revision snapshot's. */
+interface RankColumns {
+	id: AnyColumn;
+	cost: AnyColumn;
+	paybackYears: AnyColumn;
+	co2: AnyColumn;
+	repairCost: AnyColumn;
+}
+
 /**
  * The orders, each total (ties by id): saving biggest first; payback shortest first with
  * findings that have none last; CO2 avoided most first (none last).
  */
-export const RANK_ORDER: Record<SavingsRank, SQL[]> = {
-	savings: [desc(F.cost), asc(F.id)],
-	payback: [sql`${F.paybackYears} IS NULL`, asc(F.paybackYears), asc(F.id)],
-	co2: [sql`${F.co2} IS NULL`, desc(F.co2), asc(F.id)]
-};
+export const rankOrder = (c: RankColumns, rank: SavingsRank): SQL[] =>
+	({
+		savings: [desc(c.cost), asc(c.id)],
+		payback: [sql`${c.paybackYears} IS NULL`, asc(c.paybackYears), asc(c.id)],
+		co2: [sql`${c.co2} IS NULL`, desc(c.co2), asc(c.id)]
+	})[rank];
 
-const orderBy = (rank: SavingsRank) => sql`ORDER BY ${sql.join(RANK_ORDER[rank], sql`, `)}`;
-/** Running sums row by row (the order is total, so no two rows share a place). */
-const runningOver = (rank: SavingsRank) =>
-	sql`OVER (${orderBy(rank)} ROWS BETWEEN UNBOUNDED PRECEDING AND CURRENT ROW)`;
+/** A row's place and the running sums of saving and repair cost in rank order. */
+function ranking(c: RankColumns, rank: SavingsRank) {
+	const orderBy = sql`ORDER BY ${sql.join(rankOrder(c, rank), sql`, `)}`;
+	// Running sums row by row (the order is total, so no two rows share a place).
+	const over = sql`OVER (${orderBy} ROWS BETWEEN UNBOUNDED PRECEDING AND CURRENT ROW)`;
+	return {
+		place: sql<string | number>`ROW_NUMBER() OVER (${orderBy})`.as('place'),
+		cumulativeSaving: sql<string | number>`SUM(${c.cost}) ${over}`.as('cumulative_saving'),
+		cumulativeRepair: sql<string | number>`SUM(COALESCE(${c.repairCost}, 0)) ${over}`.as(
+			'cumulative_repair'
+		)
+	};
+}
+
+const placed = (
+	r: ItemColumns & Record<'place' | 'cumulativeSaving' | 'cumulativeRepair', string | number>,
+	currency: string
+) =>
+	savingsItem(r, currency, {
+		rank: Number(r.place),
+		saving: Number(r.cumulativeSaving),
+		repair: Number(r.cumulativeRepair)
+	});
 
 const n = (v: string | number | null) => (v === null ? null : Number(v));
 
@@ -90,7 +122,6 @@ export async function rankedItems(
 	rank: SavingsRank,
 	limit = MAX_SAVINGS_ITEMS
 ): Promise<SavingsItem[]> {
-	const over = runningOver(rank);
 	const ranked = db
 		.select({
 			id: F.id,
@@ -109,15 +140,12 @@ export async function rankedItems(
 			waterM3Year: F.water,
 			repairCostMinor: F.repairCost,
 			paybackYears: F.paybackYears,
-			place: sql<string | number>`ROW_NUMBER() OVER (${orderBy(rank)})`.as('place'),
-			cumulativeSaving: sql<string | number>`SUM(${F.cost}) ${over}`.as('cumulative_saving'),
-			cumulativeRepair: sql<string | number>`SUM(COALESCE(${F.repairCost}, 0)) ${over}`.as(
-				'cumulative_repair'
-			)
+			measureId: F.measureId,
+			...ranking(F, rank)
 		})
 		.from(F)
 		.where(savingFindingSql(survey.id, survey.basisId))
-		.orderBy(...RANK_ORDER[rank])
+		.orderBy(...rankOrder(F, rank))
 		.limit(limit)
 		.as('ranked');
 	const rows = await db
@@ -138,6 +166,7 @@ export async function rankedItems(
 			waterM3Year: ranked.waterM3Year,
 			repairCostMinor: ranked.repairCostMinor,
 			paybackYears: ranked.paybackYears,
+			measureId: ranked.measureId,
 			place: ranked.place,
 			cumulativeSaving: ranked.cumulativeSaving,
 			cumulativeRepair: ranked.cumulativeRepair
@@ -147,13 +176,46 @@ export async function rankedItems(
 		.leftJoin(areas, eq(areas.id, ranked.areaId))
 		.leftJoin(headers, eq(headers.id, ranked.headerId))
 		.orderBy(asc(ranked.place));
-	return rows.map((r) =>
-		savingsItem(r, survey.currency, {
-			rank: Number(r.place),
-			saving: Number(r.cumulativeSaving),
-			repair: Number(r.cumulativeRepair)
+	return rows.map((r) => placed(r, survey.currency));
+}
+
+/**
+ * The same ranking over a published revision's frozen snapshot (its names are frozen in it
+ * too, so one statement): what the client is shown, never the live findings.
+ */
+export async function rankedRevisionItems(
+	db: Executor,
+	revision: { id: string; currency: string },
+	rank: SavingsRank,
+	limit = MAX_SAVINGS_ITEMS
+): Promise<SavingsItem[]> {
+	const cols = { ...S, id: S.findingId };
+	const rows = await db
+		.select({
+			id: S.findingId,
+			kind: S.kind,
+			tag: S.tag,
+			location: S.location,
+			area: S.areaName,
+			header: S.headerName,
+			condition: S.condition,
+			status: S.status,
+			steamKgH: S.steamLoss,
+			heatKw: S.heatLoss,
+			fuelGjYear: S.fuelEnergy,
+			costMinor: S.cost,
+			co2KgYear: S.co2,
+			waterM3Year: S.water,
+			repairCostMinor: S.repairCost,
+			paybackYears: S.paybackYears,
+			measureId: S.measureId,
+			...ranking(cols, rank)
 		})
-	);
+		.from(S)
+		.where(savingSnapshotSql(revision.id))
+		.orderBy(...rankOrder(cols, rank))
+		.limit(limit);
+	return rows.map((r) => placed(r, revision.currency));
 }
 
 /** The stored columns of one listed finding, as a query gives them. */
@@ -174,6 +236,7 @@ export interface ItemColumns {
 	waterM3Year: number | null;
 	repairCostMinor: string | number | null;
 	paybackYears: number | null;
+	measureId?: string | null;
 }
 
 /** A listed finding with its words, its money as numbers, its place and the running sums. */
@@ -204,6 +267,7 @@ export function savingsItem(
 		waterM3Year: r.waterM3Year,
 		repairCostMinor: n(r.repairCostMinor),
 		paybackYears: r.paybackYears,
+		measureId: r.measureId ?? null,
 		cumulativeSavingMinor: at.saving,
 		cumulativeRepairCostMinor: at.repair
 	};

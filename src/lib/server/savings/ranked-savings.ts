@@ -1,35 +1,39 @@
 /**
- * `rankedSavings`: a survey's ranked savings list with its totals and breakdown, as
- * `GET /api/surveys/[id]/savings` answers it (docs/savings.md). Three statements, all SQL over
- * the typed figure columns: the ranking (window sums, cut to MAX_SAVINGS_ITEMS), the grouped
- * totals, and the basis's life and discount rate for the economics of the whole.
+ * `rankedSavings`: a survey's ranked savings list with its totals, breakdown and measures, as
+ * `GET /api/surveys/[id]/savings` answers it (docs/savings.md), on the figures the reader is
+ * shown (publish/figures.ts): a client the last published revision's frozen snapshot, staff the
+ * live findings until the survey is published. All SQL over typed figure columns: the ranking
+ * (window sums, cut to MAX_SAVINGS_ITEMS), the grouped totals, the measures' sums.
  */
-import { eq } from 'drizzle-orm';
-import { measureEconomics } from '../../economics/measure';
 import { MAX_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
-import { costBases } from '../db/schema';
 import type { Executor } from '../db/types';
-import { rankedItems, type SavingsItem } from './ranked-list';
-import { savingsTotals, type SavingsBreakdown, type SavingsTotals } from './totals';
+import type { MeasureRow } from '../measures/sums';
+import { choiceWords, type FigureChoice, type Reader } from '../publish/choose';
+import { chosenFigures, type ChosenFigures } from '../publish/figures';
+import { rankedItems, rankedRevisionItems, type SavingsItem } from './ranked-list';
+import type { SavingsBreakdown, SavingsTotals, WholeEconomics } from './totals';
 
-export type { SavingsItem, SavingsBreakdown, SavingsTotals };
+export type { SavingsItem, SavingsBreakdown, SavingsTotals, WholeEconomics };
 export type { SavingsGroup } from './totals';
 
-/** NPV and IRR of the whole list over the cost basis's life and discount rate. */
-export interface WholeEconomics {
-	/** The basis's discount rate, a fraction per year. */
-	discountRate: number;
-	/** The basis's life, whole years. */
-	lifeYears: number;
-	/** NPV of the known repair costs against the total saving, minor units (not rounded). */
-	npvMinor: number;
-	/** IRR, a fraction per year; null when no single rate exists (nothing to repay, or free). */
-	irr: number | null;
+/** Which figures the list is of, for the reader to see. */
+export interface FiguresShown {
+	choice: FigureChoice;
+	/** choiceWords: "Revision 2, as published to the client.", "DRAFT — …". */
+	words: string;
+	/** The published revision listed, or null for live figures. */
+	revision: { number: number; publishedAt: Date; note: string | null } | null;
 }
+
+/** A measure in the list's order, with its place (1-based). */
+export type RankedMeasure = MeasureRow & { rank: number };
 
 export interface RankedSavings {
 	rank: SavingsRank;
+	figures: FiguresShown;
 	items: SavingsItem[];
+	/** The measures (jobs of several findings) in the same order: saving, payback or CO2. */
+	measures: RankedMeasure[];
 	totals: SavingsTotals & { economics: WholeEconomics | null };
 	breakdown: SavingsBreakdown;
 	/** More saving findings than MAX_SAVINGS_ITEMS: only the first are listed (totals are of all). */
@@ -38,58 +42,61 @@ export interface RankedSavings {
 	outOfDate: number;
 }
 
-/** The survey as the list needs it (SurveyPricing, $lib/server/desk/findings-query). */
-export interface SavingsSurvey {
-	id: string;
-	basisId: string | null;
-	currency: string;
-}
+/** Null last; otherwise `a` before `b` when `better`. */
+const nullsLast = (a: number | null, b: number | null, ascending: boolean) =>
+	a === null ? (b === null ? 0 : 1) : b === null ? -1 : ascending ? a - b : b - a;
 
-async function lifeTerms(db: Executor, basisId: string | null) {
-	if (basisId === null) return null;
-	const [row] = await db
-		.select({ basis: costBases.basis })
-		.from(costBases)
-		.where(eq(costBases.id, basisId))
-		.limit(1);
-	const { discountRate, lifeYears } = row?.basis ?? {};
-	return discountRate === undefined || lifeYears === undefined ? null : { discountRate, lifeYears };
-}
-
-/** NPV and IRR of a list's totals on a basis's life and discount rate; null without them. */
-export async function wholeEconomics(
-	db: Executor,
-	basisId: string | null,
-	totals: Pick<SavingsTotals, 'count' | 'withoutRepairCost' | 'repairCostMinor' | 'costMinor'>
-): Promise<WholeEconomics | null> {
-	const terms = await lifeTerms(db, basisId);
-	const priced = totals.count > 0 && totals.withoutRepairCost < totals.count;
-	if (!terms || !priced) return null;
-	return {
-		...terms,
-		...measureEconomics(
-			{ costMinor: totals.repairCostMinor, annualSavingMinor: totals.costMinor },
-			terms
-		)
+/** The measures' order for a rank, total (ties by id), as the findings' (rankOrder). */
+export function rankMeasures(measures: MeasureRow[], rank: SavingsRank): RankedMeasure[] {
+	const order: Record<SavingsRank, (a: MeasureRow, b: MeasureRow) => number> = {
+		savings: (a, b) => b.annualSaving - a.annualSaving,
+		payback: (a, b) => nullsLast(a.paybackYears, b.paybackYears, true),
+		co2: (a, b) => b.co2Kg - a.co2Kg
 	};
+	return [...measures]
+		.sort((a, b) => order[rank](a, b) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))
+		.map((m, i) => ({ ...m, rank: i + 1 }));
 }
 
+/** The ranked list of the chosen figures (live findings or a revision's snapshot). */
 export async function rankedSavings(
 	db: Executor,
-	survey: SavingsSurvey,
-	{ rank }: { rank: SavingsRank }
+	figures: ChosenFigures,
+	rank: SavingsRank
 ): Promise<RankedSavings> {
-	const [items, { totals, breakdown }] = await Promise.all([
-		rankedItems(db, survey, rank, MAX_SAVINGS_ITEMS),
-		savingsTotals(db, survey)
-	]);
-	const economics = await wholeEconomics(db, survey.basisId, totals);
+	const { choice, revision, totals, currency } = figures;
+	const items = revision
+		? await rankedRevisionItems(db, { id: revision.id, currency }, rank, MAX_SAVINGS_ITEMS)
+		: await rankedItems(db, figures.pricing, rank, MAX_SAVINGS_ITEMS);
 	return {
 		rank,
+		figures: {
+			choice,
+			words: choiceWords(choice),
+			revision: revision
+				? { number: revision.number, publishedAt: revision.publishedAt, note: revision.note }
+				: null
+		},
 		items,
-		totals: { ...totals, economics },
-		breakdown,
+		measures: rankMeasures(figures.measures, rank),
+		totals,
+		breakdown: figures.breakdown,
 		truncated: totals.count > items.length,
-		outOfDate: totals.outOfDate
+		outOfDate: revision ? 0 : totals.outOfDate
 	};
+}
+
+export type SavingsOutcome = { ok: true; list: RankedSavings } | { ok: false; message: string };
+
+/** The list for a reader (the caller checked read access); null when the survey is gone. */
+export async function readerSavings(
+	db: Executor,
+	surveyId: string,
+	reader: Reader,
+	rank: SavingsRank,
+	asked?: number
+): Promise<SavingsOutcome | null> {
+	const chosen = await chosenFigures(db, surveyId, reader, asked);
+	if (!chosen?.ok) return chosen;
+	return { ok: true, list: await rankedSavings(db, chosen.figures, rank) };
 }

@@ -1,13 +1,16 @@
 /**
- * The ranked savings list on the app's database, for the route file (which makes no queries):
- * kept between requests like the review table's views ($lib/server/desk/findings-cache), keyed
- * on the survey, the basis it counts as current, the firm's change counter as read before the
- * queries ran, and the order — every write the list can show moves that counter.
+ * The ranked savings list on the app's database, for the route file and the Desk's savings page
+ * (which make no queries): kept between requests like the review table's views
+ * ($lib/server/desk/findings-cache). The figures are chosen first (publish/figures.ts: two
+ * small reads), and the key is that choice — a revision's frozen snapshot never changes, so its
+ * key is its number; live figures are keyed on the basis they count as current and the firm's
+ * change counter as read before the queries ran (every write the list can show moves it).
  */
 import type { SavingsRank } from '../../schemas/savings';
 import { db } from '../db';
 import { viewCache } from '../desk/findings-cache';
-import { surveyPricing } from '../desk/findings-query';
+import type { Reader } from '../publish/choose';
+import { figureChoice, readFigures } from '../publish/figures';
 import { rankedSavings, type RankedSavings } from './ranked-savings';
 
 /** Items kept at most over every kept list (a list holds up to 5,000). */
@@ -21,31 +24,52 @@ interface Kept {
 
 const kept = viewCache<Kept>({
 	maxSize: SAVINGS_CACHE_ITEMS,
-	size: (k) => k.list.items.length + 1
+	size: (k) => k.list.items.length + k.list.measures.length + 1
 });
 
-async function keptSavings(surveyId: string, rank: SavingsRank): Promise<Kept | null> {
-	const survey = await surveyPricing(db, surveyId);
-	if (!survey) return null;
-	const key = JSON.stringify([survey.id, survey.basisId, survey.revision, rank]);
-	return kept(key, async () => {
-		const list = await rankedSavings(db, survey, { rank });
+export type KeptOutcome = { ok: true; kept: Kept } | { ok: false; message: string };
+
+async function keptSavings(
+	surveyId: string,
+	reader: Reader,
+	rank: SavingsRank,
+	asked?: number
+): Promise<KeptOutcome | null> {
+	const chosen = await figureChoice(db, surveyId, reader, asked);
+	if (!chosen?.ok) return chosen;
+	const { choice, pricing } = chosen;
+	const key = JSON.stringify(
+		choice.kind === 'revision'
+			? [surveyId, choice, rank]
+			: [surveyId, choice, pricing.basisId, pricing.revision, rank]
+	);
+	const value = await kept(key, async () => {
+		const list = await rankedSavings(db, await readFigures(db, surveyId, chosen), rank);
 		return { list, json: JSON.stringify(list) };
 	});
+	return { ok: true, kept: value };
 }
 
-/** The survey's ranked savings list; null when the survey is gone. */
+export type ListOutcome = { ok: true; list: RankedSavings } | { ok: false; message: string };
+
+/** The survey's ranked savings list for this reader; null when the survey is gone. */
 export async function surveySavings(
 	surveyId: string,
-	rank: SavingsRank
-): Promise<RankedSavings | null> {
-	return (await keptSavings(surveyId, rank))?.list ?? null;
+	reader: Reader,
+	rank: SavingsRank,
+	asked?: number
+): Promise<ListOutcome | null> {
+	const out = await keptSavings(surveyId, reader, rank, asked);
+	return out?.ok ? { ok: true, list: out.kept.list } : out;
 }
 
-/** The same list as the API's JSON body (serialized once per kept list); null when gone. */
+/** The same list as the API's JSON body (serialized once per kept list). */
 export async function surveySavingsJson(
 	surveyId: string,
-	rank: SavingsRank
-): Promise<string | null> {
-	return (await keptSavings(surveyId, rank))?.json ?? null;
+	reader: Reader,
+	rank: SavingsRank,
+	asked?: number
+): Promise<{ ok: true; json: string } | { ok: false; message: string } | null> {
+	const out = await keptSavings(surveyId, reader, rank, asked);
+	return out?.ok ? { ok: true, json: out.kept.json } : out;
 }

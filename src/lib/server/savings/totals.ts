@@ -6,8 +6,11 @@
  */
 import { and, eq, isNull, sql, type SQL } from 'drizzle-orm';
 import { FINDING_KINDS, type FindingKind } from '../../schemas/finding-vocabulary';
+import { measureEconomics } from '../../economics/measure';
 import { simplePaybackYears } from '../../economics/payback';
-import { areas, findings as F } from '../db/schema';
+import { basisLifeTerms } from '../measures/sums';
+import { areas, findings as F, measures as M, surveyRevisionFindings as S } from '../db/schema';
+import { savingSnapshotSql } from '../publish/snapshot';
 import type { Executor } from '../db/types';
 import { figuresOutOfDateSql } from '../pricing/state';
 import { ENGINE_VERSION } from '../../steam/version';
@@ -29,7 +32,14 @@ export interface SavingsTotals {
 	repairCostMinor: number;
 	/** Saving findings whose repair is not priced yet (left out of repairCostMinor). */
 	withoutRepairCost: number;
-	/** repairCostMinor ÷ costMinor, years; null with no saving or no repair priced. */
+	/**
+	 * The measures' own costs (access, scaffold, shutdown, other) of the survey's measures that
+	 * hold a live finding, minor units: part of the investment, in no finding's repair cost.
+	 */
+	extraCostMinor: number;
+	/** What the repairs cost in all: repairCostMinor + extraCostMinor, minor units. */
+	investmentMinor: number;
+	/** investmentMinor ÷ costMinor, years; null with no saving or nothing priced. */
 	paybackYears: number | null;
 	currency: string;
 	/** Live findings left out because their figures are out of date (another basis or engine). */
@@ -91,11 +101,54 @@ export function into(
 	map.set(key, group);
 }
 
+/** The own costs of the survey's measures that hold a live finding, minor units. */
+async function measureExtras(db: Executor, surveyId: string): Promise<number> {
+	const [row] = await db
+		.select({
+			extra: sql<
+				string | number | null
+			>`SUM(${M.accessCost} + ${M.scaffoldCost} + ${M.shutdownCost} + ${M.otherCost})`
+		})
+		.from(M)
+		.where(
+			and(
+				eq(M.surveyId, surveyId),
+				isNull(M.deletedAt),
+				sql`EXISTS (SELECT 1 FROM ${F} WHERE ${F.measureId} = ${M.id} AND ${F.deletedAt} IS NULL)`
+			)
+		);
+	return num(row?.extra);
+}
+
+/**
+ * The payback of a whole (list or revision): its investment ÷ its saving, with the investment
+ * unknown — not free — while no repair is priced and no measure adds a cost.
+ */
+export function withInvestment<T extends SavingsTotals>(totals: T, extraCostMinor: number): T {
+	const priced = totals.withoutRepairCost < totals.count || extraCostMinor > 0;
+	const investmentMinor = totals.repairCostMinor + extraCostMinor;
+	return {
+		...totals,
+		extraCostMinor,
+		investmentMinor,
+		paybackYears: simplePaybackYears(priced ? investmentMinor : null, totals.costMinor)
+	};
+}
+
+/**
+ * A revision's frozen totals as this code reads them: a revision published before measures'
+ * own costs were counted has none (its payback was its findings' repairs ÷ its saving).
+ */
+export function frozenTotals(t: SavingsTotals): SavingsTotals {
+	return t.extraCostMinor === undefined ? withInvestment(t, 0) : t;
+}
+
 export async function savingsTotals(
 	db: Executor,
 	survey: { id: string; basisId: string | null; currency: string }
 ): Promise<{ totals: SavingsTotals; breakdown: SavingsBreakdown }> {
 	const saving = savingFindingSql(survey.id, survey.basisId);
+	const extras = measureExtras(db, survey.id);
 	const groups = await db
 		.select({
 			kind: F.kind,
@@ -130,6 +183,8 @@ export async function savingsTotals(
 		waterM3Year: 0,
 		repairCostMinor: 0,
 		withoutRepairCost: 0,
+		extraCostMinor: 0,
+		investmentMinor: 0,
 		paybackYears: null,
 		currency: survey.currency,
 		outOfDate: 0,
@@ -153,20 +208,83 @@ export async function savingsTotals(
 		into(byKind as Map<string | null, SavingsGroup>, g.kind, kindWords(g.kind), g);
 		into(byArea, g.areaId, g.area ?? 'No area', g);
 	}
-	// No repair priced at all is an unknown cost, not a free one.
-	const priced = totals.withoutRepairCost < totals.count;
-	totals.paybackYears = simplePaybackYears(
-		priced ? totals.repairCostMinor : null,
-		totals.costMinor
-	);
 	const kindOrder = (k: string | null) => FINDING_KINDS.indexOf(k as FindingKind);
 	return {
-		totals,
+		totals: withInvestment(totals, await extras),
 		breakdown: {
 			kind: [...byKind.values()].sort(
 				(a, b) => bySaving(a, b) || kindOrder(a.key) - kindOrder(b.key)
 			),
 			area: [...byArea.values()].sort(bySaving)
 		}
+	};
+}
+
+/** The breakdown by kind and area of a revision's snapshot (as savingsTotals groups live ones). */
+export async function revisionBreakdown(
+	db: Executor,
+	revisionId: string
+): Promise<SavingsBreakdown> {
+	const groups = await db
+		.select({
+			kind: S.kind,
+			areaId: S.areaId,
+			area: S.areaName,
+			count: sql<string | number>`COUNT(*)`,
+			cost: sql<string | number | null>`SUM(${S.cost})`,
+			repair: sql<string | number | null>`SUM(${S.repairCost})`,
+			co2: sql<string | number | null>`SUM(${S.co2})`
+		})
+		.from(S)
+		.where(savingSnapshotSql(revisionId))
+		.groupBy(S.kind, S.areaId, S.areaName);
+	const fold = (
+		key: (g: (typeof groups)[number]) => string | null,
+		label: (g: (typeof groups)[number]) => string
+	) => {
+		const map = new Map<string | null, SavingsGroup>();
+		for (const g of groups) into(map, key(g), label(g), g);
+		return [...map.values()].sort(bySaving);
+	};
+	return {
+		kind: fold(
+			(g) => g.kind,
+			(g) => kindWords(g.kind)
+		),
+		area: fold(
+			(g) => g.areaId,
+			(g) => g.area ?? 'No area'
+		)
+	};
+}
+
+/** NPV and IRR of the whole list over the cost basis's life and discount rate. */
+export interface WholeEconomics {
+	/** The basis's discount rate, a fraction per year. */
+	discountRate: number;
+	/** The basis's life, whole years. */
+	lifeYears: number;
+	/** NPV of the known repair costs against the total saving, minor units (not rounded). */
+	npvMinor: number;
+	/** IRR, a fraction per year; null when no single rate exists (nothing to repay, or free). */
+	irr: number | null;
+}
+
+/** NPV and IRR of a list's totals on a basis's life and discount rate; null without them. */
+export async function wholeEconomics(
+	db: Executor,
+	basisId: string | null,
+	totals: Pick<SavingsTotals, 'count' | 'paybackYears' | 'investmentMinor' | 'costMinor'>
+): Promise<WholeEconomics | null> {
+	// A payback means something is priced and something is saved.
+	if (totals.count === 0 || totals.paybackYears === null) return null;
+	const terms = await basisLifeTerms(db, basisId);
+	if (!terms) return null;
+	return {
+		...terms,
+		...measureEconomics(
+			{ costMinor: totals.investmentMinor, annualSavingMinor: totals.costMinor },
+			terms
+		)
 	};
 }

@@ -94,4 +94,29 @@ export const surveyRevisionFindings = mysqlTable(
 	]
 );
 
+/**
+ * The measures of a revision as they stood when it was published: name, description and the
+ * job's own costs (their findings are the snapshot rows with this measure_id), so a correction
+ * that edits or deletes a measure never moves what the client was shown.
+ */
+export const surveyRevisionMeasures = mysqlTable(
+	'survey_revision_measures',
+	{
+		revisionId: uuid('revision_id')
+			.notNull()
+			.references(() => surveyRevisions.id, { onDelete: 'cascade' }),
+		measureId: uuid('measure_id').notNull(),
+		name: varchar('name', { length: 160 }).notNull(),
+		description: text('description'),
+		accessCost: money('access_cost_minor').notNull(),
+		scaffoldCost: money('scaffold_cost_minor').notNull(),
+		shutdownCost: money('shutdown_cost_minor').notNull(),
+		otherCost: money('other_cost_minor').notNull(),
+		otherCostLabel: varchar('other_cost_label', { length: 120 }),
+		sortOrder: int('sort_order').notNull(),
+		createdAt: at('created_at').notNull()
+	},
+	(t) => [primaryKey({ columns: [t.revisionId, t.measureId] })]
+);
+
 export type SurveyRevisionRow = typeof surveyRevisions.$inferSelect;

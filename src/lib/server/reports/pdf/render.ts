@@ -8,7 +8,7 @@
 import type { PassThrough } from 'node:stream';
 import { moneyText } from '../../../components/savings/money';
 import { STANDING_CAUTIONS, STANDING_CAUTION_TITLE } from '../../../safety';
-import { choiceWords } from '../choose';
+import { choiceWords } from '../../publish/choose';
 import type { ReportContent } from '../content';
 import type { FindingSection } from '../finding-sections';
 import type { ReportRow } from '../rows';

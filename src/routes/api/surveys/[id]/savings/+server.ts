@@ -6,18 +6,22 @@ import type { RequestHandler } from './$types';
 
 /**
  * The ranked savings list (docs/savings.md): a survey's findings that save money, ranked by
- * annual saving, payback or CO2 avoided, with totals and a breakdown by kind and area. Staff
- * of the survey's firm, and the client company's users once the survey is published (the
- * Ladder's capability, then read access); 404 when hidden, 400 for a parameter it cannot read.
+ * annual saving, payback or CO2 avoided, with its measures, totals and a breakdown by kind and
+ * area. Staff of the survey's firm, and the client company's users once the survey is published
+ * (the Ladder's capability, then read access); 404 when hidden, 400 for a parameter it cannot
+ * read. A client always gets the last published revision's frozen figures (also while a
+ * correction is open); staff the live ones until it is published; `?revision=N` an earlier one.
  */
 export const GET: RequestHandler = async (event) => {
 	const user = requireRole(event, 'ladder.open');
 	const survey = await requireSurveyAccess(user, event.params.id, 'read');
 	const read = readSavingsQuery(event.url.searchParams);
 	if (!read.ok) error(400, read.message);
-	const body = await surveySavingsJson(survey.id, read.query.rank);
-	if (body === null) error(404, 'Not found.');
-	return new Response(body, {
+	const reader = user.role === 'client' ? 'client' : 'staff';
+	const out = await surveySavingsJson(survey.id, reader, read.query.rank, read.query.revision);
+	if (!out) error(404, 'Not found.');
+	if (!out.ok) error(404, out.message);
+	return new Response(out.json, {
 		headers: { 'content-type': 'application/json', 'cache-control': 'private, no-store' }
 	});
 };

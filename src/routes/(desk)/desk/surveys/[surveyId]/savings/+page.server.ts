@@ -13,7 +13,8 @@ export const load: PageServerLoad = async (event) => {
 	const survey = await requireSurveyAccess(user, event.params.surveyId, 'read');
 	const read = readSavingsQuery(event.url.searchParams);
 	if (!read.ok) error(400, read.message);
-	const page = await savingsPage(user.id, survey.id, read.query.rank);
+	const page = await savingsPage(user.id, survey.id, read.query.rank, read.query.revision);
 	if (!page) error(404, 'Not found.');
+	if ('missing' in page) error(404, page.missing);
 	return page;
 };
