@@ -120,3 +120,17 @@ export function cellValue(f: Figures, column: FigureColumn, system: UnitSystemId
 	const [q, scale] = QUANTITY[column]!;
 	return fromBase(q, stored * scale, displayUnit(q, system) as never);
 }
+
+/**
+ * A payback in words for people, not spreadsheets: years with a short one also in months
+ * ("0.42 years (about 5 months)"), "under a month", or "does not pay back" when there is none.
+ */
+export function paybackWords(years: number | null): string {
+	if (years === null) return 'does not pay back';
+	const number = formatSignificant(years);
+	const text = `${number} ${number === '1' ? 'year' : 'years'}`;
+	if (years >= 1) return text;
+	const months = Math.round(years * 12);
+	if (months < 1) return `${text} (under a month)`;
+	return `${text} (about ${months} ${months === 1 ? 'month' : 'months'})`;
+}

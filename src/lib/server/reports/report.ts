@@ -72,6 +72,7 @@ export function reportBody(
 						rows: () => reportRows(db, content, { limit: REPORT_TABLE_ROWS }),
 						pareto: () => paretoPoints(db, content),
 						findings: () => findingSections(db, content, store ? { store } : {}),
+						measureRows: (measureId) => reportRows(db, content, { measureId }),
 						tableRows: REPORT_TABLE_ROWS,
 						findingPages: REPORT_FINDING_PAGES
 					},

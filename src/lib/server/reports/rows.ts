@@ -45,7 +45,13 @@ const where = (cost: AnyColumn, id: AnyColumn, c: Cursor) =>
 const order = (cost: AnyColumn, id: AnyColumn, c: Cursor) =>
 	c.kind === 'below' ? [desc(cost)] : [asc(id)];
 
-function livePage(db: Executor, content: ReportContent, c: Cursor, size: number) {
+function livePage(
+	db: Executor,
+	content: ReportContent,
+	c: Cursor,
+	size: number,
+	measureId: string | null
+) {
 	return db
 		.select({
 			id: F.id,
@@ -71,12 +77,24 @@ function livePage(db: Executor, content: ReportContent, c: Cursor, size: number)
 		.leftJoin(assets, eq(assets.id, F.assetId))
 		.leftJoin(areas, eq(areas.id, F.areaId))
 		.leftJoin(headers, eq(headers.id, F.headerId))
-		.where(and(savingFindingSql(content.survey.id, content.basisId), where(F.cost, F.id, c)))
+		.where(
+			and(
+				savingFindingSql(content.survey.id, content.basisId),
+				measureId === null ? undefined : eq(F.measureId, measureId),
+				where(F.cost, F.id, c)
+			)
+		)
 		.orderBy(...order(F.cost, F.id, c))
 		.limit(size);
 }
 
-function revisionPage(db: Executor, revisionId: string, c: Cursor, size: number) {
+function revisionPage(
+	db: Executor,
+	revisionId: string,
+	c: Cursor,
+	size: number,
+	measureId: string | null
+) {
 	return db
 		.select({
 			id: S.findingId,
@@ -99,7 +117,13 @@ function revisionPage(db: Executor, revisionId: string, c: Cursor, size: number)
 			publishedVersion: S.findingVersion
 		})
 		.from(S)
-		.where(and(savingSnapshotSql(revisionId), where(S.cost, S.findingId, c)))
+		.where(
+			and(
+				savingSnapshotSql(revisionId),
+				measureId === null ? undefined : eq(S.measureId, measureId),
+				where(S.cost, S.findingId, c)
+			)
+		)
 		.orderBy(...order(S.cost, S.findingId, c))
 		.limit(size);
 }
@@ -111,7 +135,16 @@ function revisionPage(db: Executor, revisionId: string, c: Cursor, size: number)
 export async function* reportRows(
 	db: Executor,
 	content: ReportContent,
-	{ limit = Infinity, pageRows = REPORT_PAGE_ROWS }: { limit?: number; pageRows?: number } = {}
+	{
+		limit = Infinity,
+		pageRows = REPORT_PAGE_ROWS,
+		measureId = null
+	}: {
+		limit?: number;
+		pageRows?: number;
+		/** Only the findings of this measure (ranked among themselves). */
+		measureId?: string | null;
+	} = {}
 ): AsyncGenerator<ReportRow> {
 	let rank = 0;
 	let saving = 0;
@@ -129,8 +162,8 @@ export async function* reportRows(
 	while (rank < limit) {
 		const size = Math.min(pageRows, limit - rank);
 		const page: Raw[] = content.revision
-			? await revisionPage(db, content.revision.id, cursor, size)
-			: await livePage(db, content, cursor, size);
+			? await revisionPage(db, content.revision.id, cursor, size, measureId)
+			: await livePage(db, content, cursor, size, measureId);
 		if (cursor.kind === 'tie') {
 			for (const r of page) yield row(r);
 			cursor =

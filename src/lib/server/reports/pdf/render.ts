@@ -2,8 +2,8 @@
  * The PDF report, drawn from a report's content (content.ts) and its data functions — the
  * renderer makes no query of its own. Sections in order: cover, summary (totals, Pareto curve,
  * breakdown by kind and area, each with its numbers in text), the ranked table, a page per
- * finding, then safety and the limits of the figures. A measures section is a function of
- * this file's shape, given its data by the caller.
+ * measure (its costs, saving, payback and findings), a page per finding, then safety and the
+ * limits of the figures.
  */
 import type { PassThrough } from 'node:stream';
 import { moneyText } from '../../../components/savings/money';
@@ -16,6 +16,7 @@ import { pace } from '../streams';
 import { summaryLines } from '../summary';
 import { breakdownBars, paretoChart, paretoWords, type ParetoPoint } from './charts';
 import { findingPage } from './finding-page';
+import { measurePage } from './measure-page';
 import {
 	COLOUR,
 	CONTENT_WIDTH,
@@ -39,6 +40,8 @@ export interface ReportSources {
 	pareto: () => AsyncIterable<ParetoPoint>;
 	/** The finding pages, in rank order. */
 	findings: () => AsyncIterable<FindingSection>;
+	/** A measure's saving findings, in rank order. */
+	measureRows: (measureId: string) => AsyncIterable<ReportRow>;
 	/** How many rows `rows` gives at most, and finding pages `findings`. */
 	tableRows: number;
 	findingPages: number;
@@ -251,6 +254,17 @@ export async function renderReportPdf(
 				: 'Each finding follows on a page of its own, in rank order: what was found, its figures, photos, how the figures are worked out, and the assumptions with their sources.',
 			{ size: 9, colour: COLOUR.muted }
 		);
+	}
+	if (c.measures.length > 0) {
+		paragraph(
+			doc,
+			`${c.measures.length === 1 ? 'One measure follows' : `${c.measures.length} measures follow`}, a page each: jobs of several repairs done together, each costing its findings’ repairs and its own access, scaffold, shutdown and other costs.`,
+			{ size: 9, colour: COLOUR.muted }
+		);
+	}
+	for (const m of c.measures) {
+		await pace(out);
+		await measurePage(doc, m, src.measureRows(m.id), s.unitSystem, c.currency, () => pace(out));
 	}
 	for await (const section of src.findings()) {
 		await pace(out);

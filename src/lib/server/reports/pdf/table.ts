@@ -95,14 +95,15 @@ function line(
 }
 
 /**
- * Draws the rows as they come; returns how many were drawn. `totals` closes the table.
+ * Draws the rows as they come; returns how many were drawn. `totals` closes the table (none
+ * for a measure's findings: the measure's own figures stand above them).
  */
 export async function rankedTable(
 	doc: Doc,
 	rows: AsyncIterable<ReportRow>,
 	system: UnitSystemId,
 	currency: string,
-	totals: Figures,
+	totals: Figures | null,
 	/** Awaited every page: the download's pace. */
 	paced: () => Promise<void>
 ): Promise<number> {
@@ -134,6 +135,13 @@ export async function rankedTable(
 		.lineWidth(1)
 		.strokeColor(COLOUR.ink)
 		.stroke();
+	if (totals) totalLine(doc, cols, totals, system);
+	doc.x = PAGE.margin;
+	doc.moveDown(0.5);
+	return n;
+}
+
+function totalLine(doc: Doc, cols: Col[], totals: Figures, system: UnitSystemId) {
 	const totalCells = cols.map((c, i) => {
 		if (i === 1) return 'Total';
 		const figure = FIGURE_COLUMNS[i - 3];
@@ -142,7 +150,4 @@ export async function rankedTable(
 			: '';
 	});
 	line(doc, cols, null, totalCells, false, true);
-	doc.x = PAGE.margin;
-	doc.moveDown(0.5);
-	return n;
 }

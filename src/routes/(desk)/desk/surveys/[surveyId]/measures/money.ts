@@ -6,8 +6,7 @@ import { formatSignificant } from '$lib/units';
 export const money = (minor: number | null, currency: string) =>
 	minor === null ? '—' : formatMoney(fromMinorUnits(minor, currency), currency);
 
-export const years = (y: number | null) =>
-	y === null ? 'does not pay back' : `${formatSignificant(y)} years`;
+export { paybackWords as years } from '$lib/figures';
 
 export const percent = (rate: number | null) =>
 	rate === null ? 'no single rate' : `${formatSignificant(rate * 100)} %`;
