@@ -4,8 +4,8 @@
  * with NPV and IRR over the basis's life and rate (checked against $lib/economics, itself
  * checked against a published worked example in its own specs); findings of another survey or
  * firm refused with nothing written; a published survey's measures frozen. Then the findings
- * table's "Add to measure" (moves counted, bad input refused), through the route action as
- * SvelteKit calls it.
+ * table's "Add to measure" (moves counted, bad input refused) and the measure form's version
+ * check, through the route actions as SvelteKit calls them.
  */
 import { isHttpError } from '@sveltejs/kit';
 import { and, desc, eq, inArray } from 'drizzle-orm';
@@ -13,10 +13,14 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { measureEconomics } from '../../src/lib/economics';
 import { pool as appPool } from '../../src/lib/server/db';
 import * as schema from '../../src/lib/server/db/schema';
-import { MEASURE_NOT_HERE_MESSAGE } from '../../src/lib/server/measures/desk';
+import {
+	MEASURE_MOVED_MESSAGE,
+	MEASURE_NOT_HERE_MESSAGE
+} from '../../src/lib/server/measures/desk';
 import { surveyMeasures } from '../../src/lib/server/measures/sums';
 import { DESK_LOCKED_MESSAGE } from '../../src/lib/server/publish/lock';
 import { actions as tableActions } from '../../src/routes/(desk)/desk/surveys/[surveyId]/findings/+page.server';
+import { actions as measureActions } from '../../src/routes/(desk)/desk/surveys/[surveyId]/measures/[measureId]/+page.server';
 import {
 	changeMembers,
 	createMeasure,
@@ -121,9 +125,16 @@ describe('a measure', () => {
 	it('changes its extra costs, and refuses another survey’s findings with nothing written', async () => {
 		const extras = { access: 1_000, scaffold: 50_000, shutdown: 2_000, other: 3_000 };
 		const changed = { ...details(50_000), extras, otherLabel: 'Lagging removal' };
-		expect(await updateMeasure(db, t, measureId, changed)).toMatchObject({ kind: 'done' });
+		expect(await updateMeasure(db, t, measureId, changed, 1)).toMatchObject({ kind: 'done' });
 		const [m] = await surveyMeasures(db, survey);
+		expect(m.version).toBe(2);
 		expect(m.extraCost).toBe(56_000);
+		// Saved over a version someone else has since changed: refused, nothing written.
+		expect(await updateMeasure(db, t, measureId, details(7), 1)).toEqual({
+			kind: 'moved',
+			version: 2
+		});
+		expect((await surveyMeasures(db, survey))[0]).toMatchObject({ version: 2, extraCost: 56_000 });
 		expect(m.cost).toBe(104_750 + 56_000);
 		const before = await members();
 		const out = await changeMembers(db, t, measureId, 'add', [F.leak, F.otherSurveys]);
@@ -142,7 +153,7 @@ describe('a measure', () => {
 		try {
 			const before = await members();
 			expect(await changeMembers(db, t, measureId, 'add', [F.leak])).toEqual({ kind: 'frozen' });
-			expect(await updateMeasure(db, t, measureId, details(9))).toEqual({ kind: 'frozen' });
+			expect(await updateMeasure(db, t, measureId, details(9), 2)).toEqual({ kind: 'frozen' });
 			expect(await deleteMeasure(db, t, measureId)).toEqual({ kind: 'frozen' });
 			expect(await members()).toEqual(before);
 			expect((await surveyMeasures(db, survey))[0].extraCost).toBe(56_000);
@@ -332,5 +343,89 @@ describe('adding ticked findings to an existing measure (the findings table)', (
 		const stranger = { ...person, id: otherFirm, firmId: otherFirm };
 		expect((await addToMeasure(ids.traps, [F.leak], stranger)).status).toBe(404);
 		expect(await members()).toEqual(before);
+	});
+});
+
+describe('the measure form’s version check', () => {
+	let id = '';
+	const form = (version: string, name: string): [string, string][] => [
+		['version', version],
+		['name', name],
+		['description', ''],
+		['access', ''],
+		['scaffold', '250'],
+		['shutdown', ''],
+		['other', ''],
+		['otherLabel', '']
+	];
+	const update = (pairs: [string, string][]) =>
+		post(
+			measureActions.update,
+			'/(desk)/desk/surveys/[surveyId]/measures/[measureId]',
+			`/desk/surveys/${survey}/measures/${id}?/update`,
+			{ surveyId: survey, measureId: id },
+			pairs
+		);
+	const stored = async () =>
+		(
+			await db
+				.select({
+					name: schema.measures.name,
+					version: schema.measures.version,
+					scaffold: schema.measures.scaffoldCost
+				})
+				.from(schema.measures)
+				.where(eq(schema.measures.id, id))
+		)[0];
+
+	beforeAll(async () => {
+		const out = await createMeasure(db, t, { ...details(), name: 'Flash vessel' }, []);
+		id = out.kind === 'done' ? out.measureId : '';
+	});
+
+	it('saves at the version the form was opened at, as the next version', async () => {
+		expect(await stored()).toMatchObject({ version: 1 });
+		expect(await update(form('1', 'Flash vessel and vent'))).toEqual({ updated: true });
+		expect(await stored()).toEqual({
+			name: 'Flash vessel and vent',
+			version: 2,
+			scaffold: 25_000
+		});
+	});
+
+	it('refuses a save over someone else’s change, keeps what was typed, writes nothing', async () => {
+		const out = await update(form('1', 'Flash vessel, my words'));
+		expect(out.status).toBe(409);
+		expect(out.data?.error).toBe(MEASURE_MOVED_MESSAGE);
+		expect(out.data?.values).toMatchObject({ name: 'Flash vessel, my words', scaffold: '250' });
+		expect(await stored()).toEqual({
+			name: 'Flash vessel and vent',
+			version: 2,
+			scaffold: 25_000
+		});
+	});
+
+	it('refuses a form without its version (or a broken one) with words, nothing written', async () => {
+		for (const version of ['', 'two', '0']) {
+			const out = await update(form(version, 'Flash vessel, no version'));
+			expect(out.status).toBe(400);
+			expect(out.data?.error).toBe(
+				'This form lost track of the measure’s version: open the measure again'
+			);
+			expect(out.data?.values).toMatchObject({ name: 'Flash vessel, no version' });
+		}
+		expect(await stored()).toMatchObject({ name: 'Flash vessel and vent', version: 2 });
+	});
+
+	it('on a published survey answers the lock message before the version', async () => {
+		await publish(true);
+		try {
+			const out = await update(form('1', 'Flash vessel, frozen'));
+			expect(out.status).toBe(409);
+			expect(out.data?.error).toBe(DESK_LOCKED_MESSAGE);
+		} finally {
+			await publish(false);
+		}
+		expect(await stored()).toMatchObject({ name: 'Flash vessel and vent', version: 2 });
 	});
 });

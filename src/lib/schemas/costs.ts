@@ -151,6 +151,12 @@ export type MeasureExtra = (typeof MEASURE_EXTRAS)[number];
 
 export const measureNameSchema = nameSchema(160, 'Give the measure a name', 'The name');
 
+/** The version a measure's form was opened at: a save over a newer one is refused. */
+export const measureVersionSchema = z.coerce
+	.number({ error: 'This form lost track of the measure’s version: open the measure again' })
+	.int({ error: 'This form lost track of the measure’s version: open the measure again' })
+	.positive({ error: 'This form lost track of the measure’s version: open the measure again' });
+
 /** A measure's name, description and extra costs (major units of the site's currency). */
 export const measureFormSchema = z.object({
 	name: measureNameSchema,

@@ -9,6 +9,7 @@ import {
 	findingPickSchema,
 	measureExtrasMinor,
 	measureFormSchema,
+	measureVersionSchema,
 	type MeasureForm
 } from '../../schemas/costs';
 import { uuidSchema } from '../../schemas/common';
@@ -27,6 +28,10 @@ import {
 	type MeasureOutcome,
 	type MeasureTarget
 } from './write';
+
+export const MEASURE_MOVED_MESSAGE =
+	'Someone changed this measure after you opened it: nothing was saved. Your values are still ' +
+	'in the form — open the measure again to see theirs.';
 
 export const MEASURE_NOT_HERE_MESSAGE =
 	'That measure is not one of this survey’s measures (or was deleted): nothing was changed.';
@@ -110,6 +115,7 @@ export function measureChoices(surveyId: string) {
 /** A refusal's words, or null when it worked (missing: the caller answers 404). */
 function refusal(out: MeasureOutcome): string | 'missing' | null {
 	if (out.kind === 'frozen') return DESK_LOCKED_MESSAGE;
+	if (out.kind === 'moved') return MEASURE_MOVED_MESSAGE;
 	if (out.kind === 'missing') return 'missing';
 	if (out.kind === 'foreign') {
 		const which =
@@ -173,11 +179,16 @@ export async function updateMeasureForm(
 ): Promise<Answer> {
 	const values = keep(fields);
 	const form = measureFormSchema.safeParse(values);
-	if (!form.success) {
-		const errors = fieldErrors(form.error.issues);
+	const version = measureVersionSchema.safeParse(fields.version);
+	if (!form.success || !version.success) {
+		const errors = {
+			...(version.success ? {} : { form: version.error.issues[0].message }),
+			...(form.success ? {} : fieldErrors(form.error.issues))
+		};
 		return formProblem(400, Object.values(errors)[0] ?? 'Check the measure.', { values, errors });
 	}
-	const why = refusal(await updateMeasure(db, t, measureId, details(form.data, currency)));
+	const out = await updateMeasure(db, t, measureId, details(form.data, currency), version.data);
+	const why = refusal(out);
 	if (why === 'missing') return { missing: true };
 	if (why) return formProblem(409, why, { values, errors: { form: why } });
 	return { updated: true };

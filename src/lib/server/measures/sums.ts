@@ -15,6 +15,8 @@ export interface MeasureRow {
 	description: string | null;
 	extras: { access: number; scaffold: number; shutdown: number; other: number };
 	otherLabel: string | null;
+	/** Bumped by every save of the name, description or extra costs (the edit form's check). */
+	version: number;
 	findings: number;
 	/** Sum of the findings' known repair costs, minor units. */
 	repairCost: number;
@@ -71,6 +73,7 @@ export async function surveyMeasures(
 				shutdown: measures.shutdownCost,
 				other: measures.otherCost,
 				otherLabel: measures.otherCostLabel,
+				version: measures.version,
 				findings: sql<number>`COUNT(${findings.id})`,
 				repairCost: sql<number>`SUM(${findings.repairCost})`,
 				withoutRepairCost: sql<number>`SUM(${findings.id} IS NOT NULL AND ${findings.repairCost} IS NULL)`,
@@ -122,6 +125,7 @@ export async function surveyMeasures(
 			description: r.description,
 			extras,
 			otherLabel: r.otherLabel,
+			version: r.version,
 			findings: count,
 			repairCost,
 			withoutRepairCost,

@@ -47,7 +47,9 @@ export type MeasureOutcome =
 	| { kind: 'frozen' }
 	| { kind: 'missing' }
 	/** Some picked findings are not live findings of this survey: nothing was changed. */
-	| { kind: 'foreign'; count: number };
+	| { kind: 'foreign'; count: number }
+	/** The measure changed after the form was opened (its version): nothing was changed. */
+	| { kind: 'moved'; version: number };
 
 type Done = Extract<MeasureOutcome, { kind: 'done' }>;
 type Step = (tx: Tx) => Promise<Done>;
@@ -193,26 +195,34 @@ export function createMeasure(
 	);
 }
 
+/**
+ * Writes the measure's name, description and extra costs as its next version, only when it is
+ * still at `openedVersion` (the version the form was opened at): a change made by someone else
+ * meanwhile is refused (`moved`), never overwritten blind.
+ */
 export function updateMeasure(
 	db: Db,
 	t: MeasureTarget,
 	measureId: string,
-	details: MeasureDetails
+	details: MeasureDetails,
+	openedVersion: number
 ): Promise<MeasureOutcome> {
-	let before: unknown;
+	let before: typeof measures.$inferSelect | undefined;
 	return inSurvey(
 		db,
 		t,
 		'update',
 		async (tx) => {
 			before = await lockMeasure(tx, t.surveyId, measureId);
+			if (before.version !== openedVersion) refuse({ kind: 'moved', version: before.version });
+			const version = before.version + 1;
 			await tx
 				.update(measures)
-				.set({ ...columns(details), version: sql`${measures.version} + 1` })
+				.set({ ...columns(details), version })
 				.where(eq(measures.id, measureId));
 			return { kind: 'done' as const, measureId };
 		},
-		() => ({ before, after: details })
+		() => ({ before, after: { ...details, version: openedVersion + 1 } })
 	);
 }
 
