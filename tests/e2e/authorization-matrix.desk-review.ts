@@ -25,6 +25,14 @@ const reviewTable: Record<string, Record<string, Case>> = {
 				form: { findingIds: noSuchFinding, reviewed: 'yes' }
 			}),
 			expect: deskAction({ own: 400, other: 404 }, { own: 400, other: 404 })
+		},
+		// No measure chosen: refused (400) before anything is read or written.
+		'POST ?/addToMeasure': {
+			request: (t) => ({
+				path: `/desk/surveys/${t.surveyId}/findings`,
+				form: { measureId: '', findingIds: noSuchFinding }
+			}),
+			expect: deskAction({ own: 400, other: 404 }, { own: 400, other: 404 })
 		}
 	}
 };

@@ -151,6 +151,12 @@ export type MeasureExtra = (typeof MEASURE_EXTRAS)[number];
 
 export const measureNameSchema = nameSchema(160, 'Give the measure a name', 'The name');
 
+/** The version a measure's form was opened at: a save over a newer one is refused. */
+export const measureVersionSchema = z.coerce
+	.number({ error: 'This form lost track of the measure’s version: open the measure again' })
+	.int({ error: 'This form lost track of the measure’s version: open the measure again' })
+	.positive({ error: 'This form lost track of the measure’s version: open the measure again' });
+
 /** A measure's name, description and extra costs (major units of the site's currency). */
 export const measureFormSchema = z.object({
 	name: measureNameSchema,
@@ -177,10 +183,25 @@ export function measureExtrasMinor(
 	};
 }
 
+const findingIdsSchema = z
+	.array(
+		z.uuid({
+			error: 'One of the ticked findings is not a finding id: reload the table and tick again'
+		}),
+		{ error: 'Pick findings' }
+	)
+	.min(1, { error: 'Tick at least one finding' })
+	.max(5000, { error: 'At most 5000 findings at once' });
+
 /** Findings picked in a table: at least one, each a UUID. */
-export const findingPickSchema = z.object({
-	findingIds: z
-		.array(uuidSchema, { error: 'Pick findings' })
-		.min(1, { error: 'Tick at least one finding' })
-		.max(5000, { error: 'At most 5000 findings at once' })
+export const findingPickSchema = z.object({ findingIds: findingIdsSchema });
+
+/** The findings table's "Add to measure": ticked findings and one of the survey's measures. */
+export const addToMeasureSchema = z.object({
+	measureId: z
+		.string()
+		.trim()
+		.min(1, { error: 'Choose the measure to add the findings to' })
+		.pipe(z.uuid({ error: 'Choose one of this survey’s measures' })),
+	findingIds: findingIdsSchema
 });

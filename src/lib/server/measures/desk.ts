@@ -5,14 +5,16 @@
  */
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import {
+	addToMeasureSchema,
 	findingPickSchema,
 	measureExtrasMinor,
 	measureFormSchema,
+	measureVersionSchema,
 	type MeasureForm
 } from '../../schemas/costs';
 import { uuidSchema } from '../../schemas/common';
 import { db } from '../db';
-import { findings, sites, surveys } from '../db/schema';
+import { findings, measures, sites, surveys } from '../db/schema';
 import { fieldErrors, formProblem, type FormObject } from '../forms';
 import { DESK_LOCKED_MESSAGE, lockedStage } from '../publish/lock';
 import { unitSystemOf } from '../walk/person';
@@ -22,9 +24,17 @@ import {
 	createMeasure,
 	deleteMeasure,
 	updateMeasure,
+	type Attached,
 	type MeasureOutcome,
 	type MeasureTarget
 } from './write';
+
+export const MEASURE_MOVED_MESSAGE =
+	'Someone changed this measure after you opened it: nothing was saved. Your values are still ' +
+	'in the form — open the measure again to see theirs.';
+
+export const MEASURE_NOT_HERE_MESSAGE =
+	'That measure is not one of this survey’s measures (or was deleted): nothing was changed.';
 
 export const MEASURE_FIELDS = [
 	'name',
@@ -93,12 +103,26 @@ export async function measurePage(userId: string, surveyId: string, measureId: s
 	return survey && measure ? { survey, measure, members, unitSystem } : null;
 }
 
+/** The survey's live measures by name, in the consultant's order (the findings table's choice). */
+export function measureChoices(surveyId: string) {
+	return db
+		.select({ id: measures.id, name: measures.name })
+		.from(measures)
+		.where(and(eq(measures.surveyId, surveyId), isNull(measures.deletedAt)))
+		.orderBy(asc(measures.sortOrder), asc(measures.createdAt));
+}
+
 /** A refusal's words, or null when it worked (missing: the caller answers 404). */
 function refusal(out: MeasureOutcome): string | 'missing' | null {
 	if (out.kind === 'frozen') return DESK_LOCKED_MESSAGE;
+	if (out.kind === 'moved') return MEASURE_MOVED_MESSAGE;
 	if (out.kind === 'missing') return 'missing';
 	if (out.kind === 'foreign') {
-		return `${out.count} of the picked findings are not findings of this survey (or were deleted): nothing was changed.`;
+		const which =
+			out.count === 1
+				? 'One of the picked findings is not a finding of this survey (or was deleted)'
+				: `${out.count} of the picked findings are not findings of this survey (or were deleted)`;
+		return `${which}: nothing was changed.`;
 	}
 	return null;
 }
@@ -155,11 +179,16 @@ export async function updateMeasureForm(
 ): Promise<Answer> {
 	const values = keep(fields);
 	const form = measureFormSchema.safeParse(values);
-	if (!form.success) {
-		const errors = fieldErrors(form.error.issues);
+	const version = measureVersionSchema.safeParse(fields.version);
+	if (!form.success || !version.success) {
+		const errors = {
+			...(version.success ? {} : { form: version.error.issues[0].message }),
+			...(form.success ? {} : fieldErrors(form.error.issues))
+		};
 		return formProblem(400, Object.values(errors)[0] ?? 'Check the measure.', { values, errors });
 	}
-	const why = refusal(await updateMeasure(db, t, measureId, details(form.data, currency)));
+	const out = await updateMeasure(db, t, measureId, details(form.data, currency), version.data);
+	const why = refusal(out);
 	if (why === 'missing') return { missing: true };
 	if (why) return formProblem(409, why, { values, errors: { form: why } });
 	return { updated: true };
@@ -180,6 +209,55 @@ export async function membersForm(
 	if (why === 'missing') return { missing: true };
 	if (why) return formProblem(409, why);
 	return { members: op };
+}
+
+/** What adding findings did, in words after the measure's name: moves and ones already in it. */
+export function addedNote(a: Attached): string {
+	const moved = a.moved.map((m, i) => `${m.count}${i === 0 ? ' moved' : ''} from ${m.name}`);
+	const parts = [
+		...(moved.length ? [moved.join(', ')] : []),
+		...(a.already ? [`${a.already} ${a.already === 1 ? 'was' : 'were'} in it already`] : [])
+	];
+	return parts.length ? ` (${parts.join('; ')}).` : '.';
+}
+
+/**
+ * The findings table's "Add to measure": the ticked findings into one of the survey's existing
+ * measures (a finding in another measure moves). Refusals keep the choice and change nothing.
+ */
+export async function addToMeasureForm(t: MeasureTarget, fields: FormObject) {
+	const ids = fields.findingIds;
+	const measureId = typeof fields.measureId === 'string' ? fields.measureId : '';
+	const values = { measureId };
+	const form = addToMeasureSchema.safeParse({
+		measureId,
+		findingIds: Array.isArray(ids) ? ids : []
+	});
+	if (!form.success) {
+		const errors = fieldErrors(form.error.issues);
+		const first = Object.values(errors)[0] ?? 'Check the ticked findings';
+		return formProblem(400, `${first}. Nothing was changed.`, { values, errors });
+	}
+	const out = await changeMembers(db, t, form.data.measureId, 'add', form.data.findingIds);
+	if (out.kind === 'missing') {
+		return formProblem(400, MEASURE_NOT_HERE_MESSAGE, {
+			values,
+			errors: { measureId: MEASURE_NOT_HERE_MESSAGE }
+		});
+	}
+	if (out.kind !== 'done') {
+		// Frozen is the survey's state (409); a finding of another survey is bad input (400).
+		return formProblem(out.kind === 'frozen' ? 409 : 400, refusal(out) ?? '', { values });
+	}
+	const { findings: count = 0, already = 0, moved = [] } = out;
+	return {
+		added: {
+			measureId: out.measureId,
+			name: out.name ?? '',
+			findings: count,
+			note: addedNote({ findings: count, already, moved })
+		}
+	};
 }
 
 export async function deleteMeasureForm(t: MeasureTarget, measureId: string): Promise<Answer> {

@@ -22,6 +22,8 @@ export interface MeasureRow {
 	description: string | null;
 	extras: { access: number; scaffold: number; shutdown: number; other: number };
 	otherLabel: string | null;
+	/** Bumped by every save of the name, description or extra costs (the edit form's check). */
+	version: number;
 	findings: number;
 	/** Sum of the findings' known repair costs, minor units. */
 	repairCost: number;
@@ -68,6 +70,7 @@ interface MeasureSums {
 	shutdown: unknown;
 	other: unknown;
 	otherLabel: string | null;
+	version: unknown;
 	findings: unknown;
 	repairCost: unknown;
 	withoutRepairCost: unknown;
@@ -131,6 +134,7 @@ function measureRow(r: MeasureSums, terms: LifeTerms | null): MeasureRow {
 		description: r.description,
 		extras,
 		otherLabel: r.otherLabel,
+		version: num(r.version),
 		findings: count,
 		repairCost,
 		withoutRepairCost,
@@ -165,6 +169,7 @@ export async function surveyMeasures(
 				shutdown: measures.shutdownCost,
 				other: measures.otherCost,
 				otherLabel: measures.otherCostLabel,
+				version: measures.version,
 				...findingSums(findings)
 			})
 			.from(measures)
@@ -204,6 +209,8 @@ export async function revisionMeasures(
 				shutdown: M.shutdownCost,
 				other: M.otherCost,
 				otherLabel: M.otherCostLabel,
+				// A revision's measure is frozen: no version a form could save at.
+				version: sql<number>`0`,
 				...findingSums({ ...S, id: S.findingId })
 			})
 			.from(M)

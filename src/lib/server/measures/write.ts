@@ -28,12 +28,28 @@ export interface MeasureDetails {
 	otherLabel: string | null;
 }
 
+/** Findings a change took out of another measure of the survey, per measure. */
+export interface MovedFrom {
+	measureId: string;
+	name: string;
+	count: number;
+}
+
+/** What putting findings into a measure did: how many, how many were in it already, moves. */
+export interface Attached {
+	findings: number;
+	already: number;
+	moved: MovedFrom[];
+}
+
 export type MeasureOutcome =
-	| { kind: 'done'; measureId: string; findings?: number }
+	| ({ kind: 'done'; measureId: string; name?: string } & Partial<Attached>)
 	| { kind: 'frozen' }
 	| { kind: 'missing' }
 	/** Some picked findings are not live findings of this survey: nothing was changed. */
-	| { kind: 'foreign'; count: number };
+	| { kind: 'foreign'; count: number }
+	/** The measure changed after the form was opened (its version): nothing was changed. */
+	| { kind: 'moved'; version: number };
 
 type Done = Extract<MeasureOutcome, { kind: 'done' }>;
 type Step = (tx: Tx) => Promise<Done>;
@@ -96,19 +112,45 @@ async function lockMeasure(tx: Tx, surveyId: string, measureId: string) {
 	return row ?? refuse({ kind: 'missing' });
 }
 
-/** Puts findings into a measure (taking them out of any other); all must be this survey's. */
-async function attach(tx: Tx, surveyId: string, measureId: string, ids: string[]) {
+/**
+ * Puts findings into a measure, taking them out of any other (the move is counted per measure,
+ * before the write); all must be live findings of this survey, or nothing changes.
+ */
+async function attach(
+	tx: Tx,
+	surveyId: string,
+	measureId: string,
+	ids: string[]
+): Promise<Attached> {
 	const unique = [...new Set(ids)];
-	const [result] = (await tx
-		.update(findings)
-		.set({ measureId })
-		.where(
-			and(inArray(findings.id, unique), eq(findings.surveyId, surveyId), isNull(findings.deletedAt))
-		)) as unknown as [{ affectedRows: number }];
+	const picked = and(
+		inArray(findings.id, unique),
+		eq(findings.surveyId, surveyId),
+		isNull(findings.deletedAt)
+	);
+	const held = await tx
+		.select({
+			measureId: findings.measureId,
+			name: measures.name,
+			count: sql<number>`COUNT(*)`
+		})
+		.from(findings)
+		.innerJoin(measures, eq(measures.id, findings.measureId))
+		.where(picked)
+		.groupBy(findings.measureId, measures.name)
+		.orderBy(measures.name);
+	// mysql2 reports matched rows (FOUND_ROWS), so a finding already in the measure counts.
+	const [result] = (await tx.update(findings).set({ measureId }).where(picked)) as unknown as [
+		{ affectedRows: number }
+	];
 	if (result.affectedRows !== unique.length) {
 		refuse({ kind: 'foreign', count: unique.length - result.affectedRows });
 	}
-	return unique.length;
+	const moved = held
+		.filter((h) => h.measureId !== measureId)
+		.map((h) => ({ measureId: h.measureId!, name: h.name, count: Number(h.count) }));
+	const already = Number(held.find((h) => h.measureId === measureId)?.count ?? 0);
+	return { findings: unique.length, already, moved };
 }
 
 const columns = (d: MeasureDetails) => ({
@@ -144,33 +186,43 @@ export function createMeasure(
 				sortOrder: Number(n) + 1,
 				createdBy: t.actorId
 			});
-			const count = findingIds.length ? await attach(tx, t.surveyId, id, findingIds) : 0;
-			return { kind: 'done' as const, measureId: id, findings: count };
+			const added = findingIds.length
+				? await attach(tx, t.surveyId, id, findingIds)
+				: { findings: 0, already: 0, moved: [] };
+			return { kind: 'done' as const, measureId: id, ...added };
 		},
-		(o) => ({ ...details, findingIds, findings: o.findings })
+		(o) => ({ ...details, findingIds, findings: o.findings, moved: o.moved })
 	);
 }
 
+/**
+ * Writes the measure's name, description and extra costs as its next version, only when it is
+ * still at `openedVersion` (the version the form was opened at): a change made by someone else
+ * meanwhile is refused (`moved`), never overwritten blind.
+ */
 export function updateMeasure(
 	db: Db,
 	t: MeasureTarget,
 	measureId: string,
-	details: MeasureDetails
+	details: MeasureDetails,
+	openedVersion: number
 ): Promise<MeasureOutcome> {
-	let before: unknown;
+	let before: typeof measures.$inferSelect | undefined;
 	return inSurvey(
 		db,
 		t,
 		'update',
 		async (tx) => {
 			before = await lockMeasure(tx, t.surveyId, measureId);
+			if (before.version !== openedVersion) refuse({ kind: 'moved', version: before.version });
+			const version = before.version + 1;
 			await tx
 				.update(measures)
-				.set({ ...columns(details), version: sql`${measures.version} + 1` })
+				.set({ ...columns(details), version })
 				.where(eq(measures.id, measureId));
 			return { kind: 'done' as const, measureId };
 		},
-		() => ({ before, after: details })
+		() => ({ before, after: { ...details, version: openedVersion + 1 } })
 	);
 }
 
@@ -187,10 +239,10 @@ export function changeMembers(
 		t,
 		op === 'add' ? 'add-findings' : 'remove-findings',
 		async (tx) => {
-			await lockMeasure(tx, t.surveyId, measureId);
+			const { name } = await lockMeasure(tx, t.surveyId, measureId);
 			if (op === 'add') {
-				const count = await attach(tx, t.surveyId, measureId, findingIds);
-				return { kind: 'done' as const, measureId, findings: count };
+				const added = await attach(tx, t.surveyId, measureId, findingIds);
+				return { kind: 'done' as const, measureId, name, ...added };
 			}
 			const [result] = (await tx
 				.update(findings)
@@ -200,7 +252,7 @@ export function changeMembers(
 				)) as unknown as [{ affectedRows: number }];
 			return { kind: 'done' as const, measureId, findings: result.affectedRows };
 		},
-		(o) => ({ findingIds, findings: o.findings })
+		(o) => ({ findingIds, findings: o.findings, moved: o.moved })
 	);
 }
 

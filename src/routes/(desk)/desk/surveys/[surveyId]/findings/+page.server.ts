@@ -1,7 +1,8 @@
 import { error } from '@sveltejs/kit';
 import { bulkReviewSchema } from '$lib/schemas/desk-findings';
 import { reviewFindings, tableFacts } from '$lib/server/desk/findings-table';
-import { formProblem, parseForm } from '$lib/server/forms';
+import { formProblem, parseForm, readNestedForm } from '$lib/server/forms';
+import { addToMeasureForm, measureChoices } from '$lib/server/measures/desk';
 import { requireRole, requireSurveyAccess } from '$lib/server/policy';
 import { DESK_LOCKED_MESSAGE } from '$lib/server/publish/lock';
 import type { Actions, PageServerLoad } from './$types';
@@ -10,9 +11,12 @@ import type { Actions, PageServerLoad } from './$types';
 export const load: PageServerLoad = async (event) => {
 	const user = requireRole(event, 'survey.manage');
 	const survey = await requireSurveyAccess(user, event.params.surveyId, 'write');
-	const facts = await tableFacts(user, survey.id);
+	const [facts, measures] = await Promise.all([
+		tableFacts(user, survey.id),
+		measureChoices(survey.id)
+	]);
 	if (!facts) error(404, 'Not found.');
-	return facts;
+	return { ...facts, measures };
 };
 
 export const actions: Actions = {
@@ -42,5 +46,14 @@ export const actions: Actions = {
 			);
 		}
 		return { reviewed, changed: outcome.changed, unchanged: outcome.unchanged };
+	},
+
+	/** Puts the ticked findings into one of the survey's measures (moving them from any other). */
+	addToMeasure: async (event) => {
+		const user = requireRole(event, 'survey.manage');
+		const survey = await requireSurveyAccess(user, event.params.surveyId, 'write');
+		const fields = await readNestedForm(event.request, { lists: ['findingIds'] });
+		const t = { firmId: user.firmId, actorId: user.id, surveyId: survey.id };
+		return addToMeasureForm(t, fields);
 	}
 };
