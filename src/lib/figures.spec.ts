@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { paybackWords } from './figures';
+import { paybackShort, paybackWords } from './figures';
 
 describe('paybackWords', () => {
 	it('says years, and a payback under a year also in months', () => {
@@ -10,5 +10,15 @@ describe('paybackWords', () => {
 		expect(paybackWords(1 / 12)).toMatch(/\(about 1 month\)$/);
 		expect(paybackWords(0.02)).toMatch(/\(under a month\)$/);
 		expect(paybackWords(0.96)).toMatch(/\(about 12 months\)$/);
+	});
+});
+
+describe('paybackShort', () => {
+	it('gives months under a year, years with one decimal under ten', () => {
+		expect(paybackShort(null)).toBe('—');
+		expect(paybackShort(0.01)).toBe('under a month');
+		expect(paybackShort(0.25)).toBe('about 3 months');
+		expect(paybackShort(2.345)).toBe('2.3 years');
+		expect(paybackShort(12.6)).toBe('13 years');
 	});
 });

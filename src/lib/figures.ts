@@ -130,7 +130,19 @@ export function paybackWords(years: number | null): string {
 	const number = formatSignificant(years);
 	const text = `${number} ${number === '1' ? 'year' : 'years'}`;
 	if (years >= 1) return text;
+	return `${text} (${monthsWords(years)})`;
+}
+
+/** Under a year, in months: "about 5 months", "under a month". */
+function monthsWords(years: number): string {
 	const months = Math.round(years * 12);
-	if (months < 1) return `${text} (under a month)`;
-	return `${text} (about ${months} ${months === 1 ? 'month' : 'months'})`;
+	if (months < 1) return 'under a month';
+	return `about ${months} ${months === 1 ? 'month' : 'months'}`;
+}
+
+/** A payback in a tile's few words: "about 5 months", "1.4 years", "—" for none. */
+export function paybackShort(years: number | null): string {
+	if (years === null) return '—';
+	if (years < 1) return monthsWords(years);
+	return `${years.toFixed(years < 10 ? 1 : 0)} years`;
 }

@@ -8,7 +8,7 @@
  * this file's own invented site.
  */
 import ExcelJS from 'exceljs';
-import { eq, sql } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 import { isHttpError } from '@sveltejs/kit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CostBasis } from '../../src/lib/schemas/site';
@@ -331,6 +331,59 @@ describe('a draft survey, as the consultant reports it', () => {
 		expect(pages.filter((p) => p.includes('How the figures are worked out')).length).toBe(
 			list.totals.count
 		);
+	});
+});
+
+describe('a measure in the report', () => {
+	const measureId = '5e9c0000-0007-4000-8000-000000000001';
+	afterAll(async () => {
+		await db
+			.update(schema.findings)
+			.set({ measureId: null })
+			.where(eq(schema.findings.measureId, measureId));
+		await db.delete(schema.measures).where(eq(schema.measures.id, measureId));
+		await touchFirm(db, firmId);
+	});
+
+	it('the PDF gives it a page: its own costs, cost in all, saving, payback and its findings', async () => {
+		const before = await liveList();
+		const held = before.items.slice(0, 2);
+		await db.insert(schema.measures).values({
+			id: measureId,
+			surveyId: survey,
+			name: 'Reports spec: the two worst, one shutdown',
+			scaffoldCost: 123_400,
+			shutdownCost: 50_000
+		});
+		await db
+			.update(schema.findings)
+			.set({ measureId })
+			.where(
+				inArray(
+					schema.findings.id,
+					held.map((i) => i.id)
+				)
+			);
+		await touchFirm(db, firmId);
+		const list = await liveList();
+		const [m] = list.measures;
+		expect(m.cost).toBe(held.reduce((t, i) => t + (i.repairCostMinor ?? 0), 0) + 173_400);
+
+		const pages = await pdfPages((await ok('pdf', consultantA)).bytes);
+		const page = pages.find((p) => p.includes('Measure: Reports spec: the two worst'));
+		expect(page, 'a page for the measure').toBeDefined();
+		expect(page).toContain(`Scaffold ${moneyText(123_400, 'EUR')}`);
+		expect(page).toContain(`Shutdown ${moneyText(50_000, 'EUR')}`);
+		expect(page).toContain(`Cost in all (EUR) ${moneyText(m.cost!, 'EUR')}`);
+		expect(page).toContain(`Annual saving (EUR/yr) ${moneyText(m.annualSaving, 'EUR')}`);
+		expect(page).toContain('Simple payback');
+		// Its findings, ranked among themselves, and no other.
+		for (const item of held) expect(page).toContain(item.location);
+		const others = list.items.filter((i) => !held.some((h) => h.id === i.id));
+		for (const item of others) expect(page).not.toContain(`${item.tag ?? item.location}`);
+		// The whole's investment counts the measure's own costs.
+		expect(pages.join('\n')).toContain(`${moneyText(list.totals.extraCostMinor, 'EUR')}`);
+		expect(list.totals.extraCostMinor).toBe(173_400);
 	});
 });
 

@@ -3,7 +3,7 @@
  * line's unit (for the XLSX summary sheet) and its text (for the PDF). One list, so the two
  * can never show different totals.
  */
-import { cellText, cellValue, columnUnit, type FigureColumn } from '../../figures';
+import { cellText, cellValue, columnUnit, paybackWords, type FigureColumn } from '../../figures';
 import { fromMinorUnits } from '../../steam';
 import { formatSignificant } from '../../units';
 import { moneyText } from '../../components/savings/money';
@@ -44,6 +44,18 @@ export function summaryLines(content: ReportContent): SummaryLine[] {
 						: `${cellText(figures, column, system)} ${unit}`
 		};
 	});
+	const money = (label: string, minor: number): SummaryLine => ({
+		label,
+		value: fromMinorUnits(minor, currency),
+		unit: currency,
+		text: moneyText(minor, currency)
+	});
+	if (t.extraCostMinor > 0) {
+		lines.push(
+			money('Measures’ own costs (access, scaffold, shutdown, other)', t.extraCostMinor),
+			money('Investment in all (repairs and measures)', t.investmentMinor)
+		);
+	}
 	const count = (label: string, n: number): SummaryLine => ({
 		label,
 		value: n,
@@ -55,7 +67,7 @@ export function summaryLines(content: ReportContent): SummaryLine[] {
 			label: 'Payback of the whole',
 			value: t.paybackYears,
 			unit: 'years',
-			text: t.paybackYears === null ? 'not known yet' : `${formatSignificant(t.paybackYears)} years`
+			text: t.paybackYears === null ? 'not known yet' : paybackWords(t.paybackYears)
 		},
 		count('Findings that save', t.count),
 		count('Of which without a repair cost yet', t.withoutRepairCost)

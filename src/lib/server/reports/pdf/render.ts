@@ -7,6 +7,7 @@
  */
 import type { PassThrough } from 'node:stream';
 import { moneyText } from '../../../components/savings/money';
+import { paybackShort } from '../../../figures';
 import { STANDING_CAUTIONS, STANDING_CAUTION_TITLE } from '../../../safety';
 import { choiceWords } from '../../publish/choose';
 import type { ReportContent } from '../content';
@@ -127,13 +128,18 @@ function cover(doc: Doc, c: ReportContent) {
 	const t = c.totals;
 	const tiles = [
 		{ label: `Annual saving (${c.currency}/yr)`, value: moneyText(t.costMinor, c.currency) },
-		{ label: `Known repair cost (${c.currency})`, value: moneyText(t.repairCostMinor, c.currency) },
+		t.extraCostMinor > 0
+			? {
+					label: `Investment: repairs and measures (${c.currency})`,
+					value: moneyText(t.investmentMinor, c.currency)
+				}
+			: {
+					label: `Known repair cost (${c.currency})`,
+					value: moneyText(t.repairCostMinor, c.currency)
+				},
 		{
 			label: 'Simple payback',
-			value:
-				t.paybackYears === null
-					? '—'
-					: `${t.paybackYears.toFixed(t.paybackYears < 10 ? 1 : 0)} years`
+			value: paybackShort(t.paybackYears)
 		},
 		{ label: 'Findings that save', value: t.count.toLocaleString('en-US') }
 	];
