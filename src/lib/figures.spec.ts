@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { paybackShort, paybackWords } from './figures';
+import { irrWords, paybackShort, paybackWords } from './figures';
 
 describe('paybackWords', () => {
 	it('says years, and a payback under a year also in months', () => {
@@ -20,5 +20,14 @@ describe('paybackShort', () => {
 		expect(paybackShort(0.25)).toBe('about 3 months');
 		expect(paybackShort(2.345)).toBe('2.3 years');
 		expect(paybackShort(12.6)).toBe('13 years');
+	});
+});
+
+describe('irrWords', () => {
+	it('gives the rate, a bound above 100 % per year, or none', () => {
+		expect(irrWords(null)).toBe('none (no single rate)');
+		expect(irrWords(0.142)).toBe('14.2 % per year');
+		expect(irrWords(1)).toBe('100 % per year');
+		expect(irrWords(16.8)).toBe('over 100 % per year');
 	});
 });

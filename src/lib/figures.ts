@@ -146,3 +146,13 @@ export function paybackShort(years: number | null): string {
 	if (years < 1) return monthsWords(years);
 	return `${years.toFixed(years < 10 ? 1 : 0)} years`;
 }
+
+/** Above this an IRR says little more than "pays back within months": it is shown as a bound. */
+export const IRR_SHOWN_UP_TO = 1;
+
+/** An internal rate of return in words: "14 % per year", "over 100 % per year", or none. */
+export function irrWords(irr: number | null): string {
+	if (irr === null) return 'none (no single rate)';
+	if (irr > IRR_SHOWN_UP_TO) return `over ${formatSignificant(IRR_SHOWN_UP_TO * 100)} % per year`;
+	return `${formatSignificant(irr * 100)} % per year`;
+}

@@ -3,7 +3,14 @@
  * line's unit (for the XLSX summary sheet) and its text (for the PDF). One list, so the two
  * can never show different totals.
  */
-import { cellText, cellValue, columnUnit, paybackWords, type FigureColumn } from '../../figures';
+import {
+	cellText,
+	cellValue,
+	columnUnit,
+	irrWords,
+	paybackWords,
+	type FigureColumn
+} from '../../figures';
 import { fromMinorUnits } from '../../steam';
 import { formatSignificant } from '../../units';
 import { moneyText } from '../../components/savings/money';
@@ -88,8 +95,7 @@ export function summaryLines(content: ReportContent): SummaryLine[] {
 				label: 'Internal rate of return',
 				value: e.irr === null ? null : e.irr * 100,
 				unit: '% per year',
-				text:
-					e.irr === null ? 'none (no single rate)' : `${formatSignificant(e.irr * 100)} % per year`
+				text: irrWords(e.irr)
 			}
 		);
 	}

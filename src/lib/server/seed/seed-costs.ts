@@ -34,14 +34,14 @@ type Entry = { identity: EntryIdentity; unitCost: number; labourHours: number | 
 
 /** The invented library: what one repair costs in EUR cents, and the labour hours it takes. */
 export function demoLibrary(): Entry[] {
-	const out: Entry[] = [{ identity: { kind: 'labour' }, unitCost: 5_800, labourHours: null }];
+	const out: Entry[] = [{ identity: { kind: 'labour' }, unitCost: 6_800, labourHours: null }];
 	for (const [trapType, price] of Object.entries(TRAP_PRICE) as [TrapType, number][]) {
 		for (const dn of TRAP_DNS) {
 			const size = 1 + (dn - 15) / 25;
 			out.push({
 				identity: { kind: 'trap-replacement', trapType, dn },
 				unitCost: Math.round(price * size),
-				labourHours: 1.5
+				labourHours: 2.5
 			});
 			out.push({
 				identity: { kind: 'trap-repair', trapType, dn },
@@ -66,18 +66,20 @@ export function demoLibrary(): Entry[] {
 			});
 		}
 	}
+	// Parts for a leak's repair (packing, gasket, a valve or a section of pipe), growing with it.
 	const leaks = {
-		pinhole: 1_500,
-		small: 3_500,
-		medium: 8_000,
-		large: 16_000,
-		'very-large': 30_000
+		pinhole: 4_500,
+		small: 11_000,
+		medium: 26_000,
+		large: 62_000,
+		'very-large': 140_000
 	};
+	const leakHours = { pinhole: 1, small: 2, medium: 3.5, large: 6, 'very-large': 10 };
 	for (const [sizeClass, unitCost] of Object.entries(leaks)) {
 		out.push({
 			identity: { kind: 'leak-repair', sizeClass: sizeClass as keyof typeof leaks },
 			unitCost,
-			labourHours: sizeClass === 'pinhole' ? 0.5 : 2
+			labourHours: leakHours[sizeClass as keyof typeof leaks]
 		});
 	}
 	return out;

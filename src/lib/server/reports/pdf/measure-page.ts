@@ -4,7 +4,7 @@
  * with a life and a discount rate, its NPV and IRR; then its saving findings in rank order.
  */
 import { moneyText } from '../../../components/savings/money';
-import { paybackWords } from '../../../figures';
+import { irrWords, paybackWords } from '../../../figures';
 import { formatSignificant, type UnitSystemId } from '../../../units';
 import type { MeasureRow } from '../../measures/sums';
 import type { ReportRow } from '../rows';
@@ -42,10 +42,7 @@ export function measureFacts(m: MeasureRow, currency: string): { label: string; 
 					},
 					{
 						label: 'Internal rate of return',
-						value:
-							m.economics.irr === null
-								? 'none (no single rate)'
-								: `${formatSignificant(m.economics.irr * 100)} % per year`
+						value: irrWords(m.economics.irr)
 					}
 				]
 			: [])
