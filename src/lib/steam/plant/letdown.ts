@@ -93,6 +93,7 @@ export interface LetdownResult {
  */
 export function letdownTurbine(input: LetdownInput): LetdownResult {
 	const steamFlow = requirePositive('Steam flow', input.steamFlow, 'kg/s');
+	requireEfficiency(input.isentropicEfficiency, 'Turbine isentropic efficiency');
 	const etaG = requireEfficiency(input.generatorEfficiency, 'Generator efficiency');
 	const price = requireNonNegative('Electricity price', input.electricityPrice, 'per kWh');
 	const dry = input.T1 === undefined && input.x1 === undefined;

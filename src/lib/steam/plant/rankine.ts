@@ -13,6 +13,7 @@
  * v Δp approximation beside it). Units: p MPa absolute, T K, h, w and q kJ/kg.
  */
 import { SteamRangeError } from '../errors';
+import { requireEfficiency } from '../losses/energy-chain';
 import type { SteamState } from '../types';
 import { expandSteam, type ExpansionResult } from './expansion';
 import { checkPressureNamed, onSaturationLine } from './inlet';
@@ -87,6 +88,7 @@ export function rankineCycle({
 	turbineEfficiency,
 	pumpEfficiency
 }: RankineInput): RankineResult {
+	requireEfficiency(turbineEfficiency, 'Turbine isentropic efficiency');
 	checkPressureNamed('boiler pressure', boilerPressure);
 	checkPressureNamed('condenser pressure', condenserPressure);
 	if (!onSaturationLine(condenserPressure)) {
