@@ -4,15 +4,13 @@
  * energy, cost and CO2 per year; water no longer made up → makeup water and treatment. Plant
  * figures are in kW (kg/s × kJ/kg); the chain takes W, so they are converted here only.
  */
+import { HOUR_S } from '../../units/constants';
 import { annualLoss, type AnnualLoss, fuelPower, requireHours } from '../losses/energy-chain';
 import type { CostBasis } from '../losses/inputs';
 import { money, type Money } from '../losses/money';
 import { annualBasis, resolveBasis, type ResolvedBasis } from '../losses/site-basis';
 import type { Assumption } from '../losses/sourced';
 import { stateFromTX } from '../saturation';
-
-/** Seconds in an hour. */
-const HOUR_S = 3600;
 
 /** The site's cost basis resolved, with the hours an opportunity runs. */
 export interface PlantBasis {
