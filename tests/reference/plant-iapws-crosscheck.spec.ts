@@ -11,6 +11,7 @@ import {
 	expandSteam,
 	pumpWork,
 	rankineCycle,
+	type RankineResult,
 	saturationDome
 } from '../../src/lib/steam/plant/index';
 import { ensureIapws, loadGenerated } from './iapws-reference';
@@ -59,16 +60,17 @@ interface Cycle {
 	dryness: number | null;
 	eta_t: number;
 	eta_p: number;
-	ref: {
-		turbineWork: number;
-		pumpWork: number;
-		netWork: number;
-		heatSupplied: number;
-		heatRejected: number;
-		thermalEfficiency: number;
-		specificSteamConsumption: number;
-		exhaustDryness: number | null;
-	};
+	ref: Pick<
+		RankineResult,
+		| 'turbineWork'
+		| 'pumpWork'
+		| 'netWork'
+		| 'heatSupplied'
+		| 'heatRejected'
+		| 'thermalEfficiency'
+		| 'specificSteamConsumption'
+		| 'exhaustDryness'
+	>;
 }
 
 interface PlantPoints {

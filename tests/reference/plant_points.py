@@ -28,11 +28,12 @@ What is left out, and why (counted in meta.dropped):
 
 import json
 import os
-import subprocess
 import sys
 
 from iapws import IAPWS97
 from iapws import iapws97 as if97
+
+from iapws_points import library_version  # this folder is on the path of a script run here
 
 BOUNDARY_K = 0.01
 DRY_X = 1e-4
@@ -198,15 +199,6 @@ def rankine_grid():
                         if case is not None:
                             cases.append(case)
     return cases
-
-
-def library_version():
-    try:
-        out = subprocess.run(["dpkg-query", "-W", "-f=${Version}", "python3-iapws"],
-                             capture_output=True, text=True, check=True)
-        return out.stdout.strip()
-    except (OSError, subprocess.CalledProcessError):
-        return "unknown"
 
 
 def main():
