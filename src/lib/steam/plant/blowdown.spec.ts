@@ -54,6 +54,7 @@ describe('blowdownRecovery', () => {
 		expect(r.flashFraction).toBeGreaterThan(0.1);
 		expect(r.flashSteamFlow).toBeCloseTo(r.rate.blowdownFlow * r.flashFraction, 15);
 		expect(r.saving.waterFlow).toBe(r.flashSteamFlow);
+		expect(r.steamPerYear).toBeCloseTo(r.flashSteamFlow * 8000 * 3600, 6);
 		expect(r.exchangerHeat).toBe(0);
 		closes(r);
 	});

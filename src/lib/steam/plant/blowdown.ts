@@ -28,6 +28,7 @@ import { saturatedLiquid, saturatedVapour } from '../saturation';
 import {
 	basisAssumptions,
 	makeupEnthalpy,
+	perYear,
 	plantBasis,
 	plantYear,
 	type PlantBasis,
@@ -116,6 +117,8 @@ export interface BlowdownResult {
 	drainHeat: number;
 	/** flashHeat + exchangerHeat, kW. */
 	heatRecovered: number;
+	/** Flash steam recovered, kg per year. */
+	steamPerYear: number;
 	/** The year saved: fuel, CO2, the flash steam's water, money. */
 	saving: PlantYear;
 	assumptions: Assumption[];
@@ -185,6 +188,7 @@ export function blowdownRecovery(input: BlowdownInput): BlowdownResult {
 	const flashHeat = x > 0 ? flashFlow * (saturatedVapour(liquidP).h - hMakeup) : 0;
 	const exchangerHeat = liquidFlow * (hIn - hDrain);
 	const heatRecovered = flashHeat + exchangerHeat;
+	const saving = plantYear(heatRecovered, flashFlow, site);
 	return {
 		rate,
 		blowdownEnthalpy: hBd,
@@ -199,7 +203,8 @@ export function blowdownRecovery(input: BlowdownInput): BlowdownResult {
 		drainTemperature: stateFromPH(liquidP, hDrain).T,
 		drainHeat: liquidFlow * (hDrain - hMakeup),
 		heatRecovered,
-		saving: plantYear(heatRecovered, flashFlow, site),
+		steamPerYear: perYear(flashFlow, saving.hours),
+		saving,
 		assumptions: blowdownAssumptions(input, rate, site),
 		cautions: plantCautions({ hotDischarge: true })
 	};
