@@ -26,7 +26,7 @@ const frameworkImports = [
 /** Engine modules import their neighbours directly: a barrel that re-exports them makes a cycle. */
 const barrelImports = {
 	// A path ending in index, a bare '.', '..', '../..', or one of the engine's barrel folders.
-	regex: '(^|/)index(\\.[jt]s)?$|^\\.{1,2}(/\\.\\.)*/?$|(^|/)(steam|units|heat|losses)/?$',
+	regex: '(^|/)index(\\.[jt]s)?$|^\\.{1,2}(/\\.\\.)*/?$|(^|/)(steam|units|heat|losses|plant)/?$',
 	message: 'Import the module itself (e.g. ../saturation), not a barrel index that re-exports it.'
 };
 

@@ -12,3 +12,4 @@ export type { Phase, Properties, Region, SteamState } from './types';
 export * from './vocabulary';
 export * from './losses/index';
 export * from './heat/index';
+export * from './plant/index';

@@ -12,7 +12,10 @@ export type CautionKey =
 	| 'water-hammer'
 	| 'old-insulation'
 	| 'local-codes'
-	| 'estimate';
+	| 'estimate'
+	| 'pressure-systems'
+	| 'wet-exhaust'
+	| 'hot-discharge';
 
 export interface Caution {
 	key: CautionKey;
@@ -31,7 +34,13 @@ export const CAUTION_TEXT: Record<CautionKey, string> = {
 	'old-insulation':
 		'Old insulation may contain asbestos: have it identified before it is disturbed.',
 	'local-codes': 'Defer to local codes, the site’s rules and licensed practice.',
-	estimate: 'These figures are engineering estimates, not guarantees.'
+	estimate: 'These figures are engineering estimates, not guarantees.',
+	'pressure-systems':
+		"Turbines, flash vessels and heat exchangers on steam are pressure equipment: their choice, installation and inspection defer to the manufacturer, the site's pressure-systems rules and a licensed engineer. These figures size an opportunity, not the equipment.",
+	'wet-exhaust':
+		"The expansion ends wet: water droplets erode turbine blades and the exhaust line needs draining. The turbine's maker must confirm the exhaust dryness it accepts.",
+	'hot-discharge':
+		'Blowdown and hot condensate scald and flash to steam when released: route them through equipment rated for the pressure, and cool what goes to drain to the temperature local rules allow.'
 };
 
 export interface CautionContext {

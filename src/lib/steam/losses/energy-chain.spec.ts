@@ -37,6 +37,12 @@ describe('fuel power and efficiency', () => {
 		expect(() => requireEfficiency(efficiency)).toThrow(/Boiler efficiency must be/);
 	});
 
+	it('names the efficiency it was given for', () => {
+		expect(() => requireEfficiency(1.2, 'Generator efficiency')).toThrow(
+			'Generator efficiency must be greater than 0 and at most 1, got 1.2'
+		);
+	});
+
 	it('tells a person who typed 80 to enter 0.8', () => {
 		expect(() => fuelPower(1, 80)).toThrow(
 			'Boiler efficiency must be greater than 0 and at most 1, got 80 (enter 0.8 for 80 %)'

@@ -13,12 +13,15 @@ const HOUR_S = 3600;
 /** Makeup water density, kg/m³: 1000 (common practice; cold water is 999–1000 kg/m³). */
 export const MAKEUP_WATER_DENSITY = 1000;
 
-/** Throws a plain message unless 0 < η ≤ 1. */
-export function requireEfficiency(efficiency: number): number {
-	requireFinite('Boiler efficiency', efficiency, '(a fraction)');
+/**
+ * Throws a plain message unless 0 < η ≤ 1.
+ * @param label what the efficiency is of, as a person reads it ("Turbine isentropic efficiency")
+ */
+export function requireEfficiency(efficiency: number, label = 'Boiler efficiency'): number {
+	requireFinite(label, efficiency, '(a fraction)');
 	if (efficiency <= 0 || efficiency > 1) {
 		throw new Error(
-			`Boiler efficiency must be greater than 0 and at most 1, got ${efficiency}` +
+			`${label} must be greater than 0 and at most 1, got ${efficiency}` +
 				(efficiency > 1 && efficiency <= 100
 					? ` (enter ${efficiency / 100} for ${efficiency} %)`
 					: '')

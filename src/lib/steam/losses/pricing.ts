@@ -17,7 +17,7 @@ import type { FindingEvaluation } from './evaluate';
 import type { CostBasis } from './inputs';
 import { fromMinorUnits, money } from './money';
 import type { FindingPhysics } from './physics';
-import { resolveBasis, type ResolvedBasis } from './site-basis';
+import { annualBasis, resolveBasis, type ResolvedBasis } from './site-basis';
 import type { Assumption } from './sourced';
 import { stateFromTX } from '../saturation';
 
@@ -78,12 +78,11 @@ export function priceFlows(
 	const makeup = makeupHeating(makeupFlow, costBasis, hfw);
 	const heatRate = steam + condensate + flows.surfaceHeat + (makeup?.heatRate ?? 0);
 	const hours = flows.hours ?? basis.hours;
-	const year = annualLoss(fuelPower(heatRate, basis.boilerEfficiency), makeupFlow, {
-		hours,
-		fuelPricePerGJ: basis.fuelPricePerGJ.value,
-		emissionFactor: basis.emissionFactor.value,
-		waterPricePerM3: basis.waterPricePerM3
-	});
+	const year = annualLoss(
+		fuelPower(heatRate, basis.boilerEfficiency),
+		makeupFlow,
+		annualBasis(basis, hours)
+	);
 	const repair = repairCost === undefined ? null : fromMinorUnits(repairCost, basis.currency);
 	const header = flows.kind === 'header';
 	const payback: Payback = header
@@ -110,7 +109,11 @@ export function priceFlows(
  * Null when the basis gives no makeup temperature or nothing is made up; zero heat when makeup
  * arrives at or above feedwater temperature.
  */
-function makeupHeating(makeupFlow: number, costBasis: CostBasis, hfw: number) {
+export function makeupHeating(
+	makeupFlow: number,
+	costBasis: Pick<CostBasis, 'makeupWaterTemperature'>,
+	hfw: number
+): { enthalpy: number; heatRate: number } | null {
 	if (costBasis.makeupWaterTemperature === undefined || makeupFlow === 0) return null;
 	const hmu = stateFromTX(costBasis.makeupWaterTemperature, 0).h;
 	return { enthalpy: hmu, heatRate: makeupFlow * Math.max(0, hfw - hmu) * 1000 };

@@ -8,7 +8,7 @@ import { stateFromPT } from '../forward';
 import { saturationTemperature } from '../region4';
 import { saturatedVapour, stateFromTX } from '../saturation';
 import type { CostBasis, Header } from './inputs';
-import { requireEfficiency, requireHours } from './energy-chain';
+import { type AnnualBasis, requireEfficiency, requireHours } from './energy-chain';
 import { FUELS, emissionFactor, fuelPricePerGJ, parseDecimal } from './fuels';
 import type { Assumption, Sourced } from './sourced';
 import { requireFinite } from './sourced';
@@ -104,6 +104,16 @@ export function resolveBasis(costBasis: CostBasis | null | undefined): ResolvedB
 			},
 			{ key: 'atmosphericPressure', label: 'Atmospheric pressure', ...atmosphere }
 		]
+	};
+}
+
+/** The prices and factors a year of a steady flow is priced at (./energy-chain.ts annualLoss). */
+export function annualBasis(basis: ResolvedBasis, hours: number): AnnualBasis {
+	return {
+		hours,
+		fuelPricePerGJ: basis.fuelPricePerGJ.value,
+		emissionFactor: basis.emissionFactor.value,
+		waterPricePerM3: basis.waterPricePerM3
 	};
 }
 
