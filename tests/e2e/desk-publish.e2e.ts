@@ -109,11 +109,11 @@ test('the savings page ranks three ways, with the chart and its numbers as text'
 	await page.getByRole('link', { name: 'Payback' }).click();
 	await expect(page).toHaveURL(/\?rank=payback$/);
 	await expect(page.getByRole('link', { name: 'Payback' })).toHaveAttribute('aria-current', 'page');
-	await expect(page.getByRole('heading', { name: 'Ranked by payback' })).toBeVisible();
+	await expect(page.getByRole('heading', { name: 'Findings, ranked by payback' })).toBeVisible();
 	expect(await shown()).toEqual(await expected('payback'));
 	await page.getByRole('link', { name: 'CO2 avoided' }).click();
 	await expect(page).toHaveURL(/\?rank=co2$/);
-	await expect(page.getByRole('heading', { name: 'Ranked by CO2 avoided' })).toBeVisible();
+	await expect(page.getByRole('heading', { name: 'Findings, ranked by CO2 avoided' })).toBeVisible();
 	expect(await shown()).toEqual(await expected('co2'));
 
 	// A rank the page cannot read is a clear 400, not a guess.
