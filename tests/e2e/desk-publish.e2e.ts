@@ -113,7 +113,9 @@ test('the savings page ranks three ways, with the chart and its numbers as text'
 	expect(await shown()).toEqual(await expected('payback'));
 	await page.getByRole('link', { name: 'CO2 avoided' }).click();
 	await expect(page).toHaveURL(/\?rank=co2$/);
-	await expect(page.getByRole('heading', { name: 'Findings, ranked by CO2 avoided' })).toBeVisible();
+	await expect(
+		page.getByRole('heading', { name: 'Findings, ranked by CO2 avoided' })
+	).toBeVisible();
 	expect(await shown()).toEqual(await expected('co2'));
 
 	// A rank the page cannot read is a clear 400, not a guess.
