@@ -16,11 +16,16 @@ import { rankedSavings, type RankedSavings } from './ranked-savings';
 /** Items kept at most over every kept list (a list holds up to 5,000). */
 export const SAVINGS_CACHE_ITEMS = 50_000;
 
-/** A kept list and its JSON, written once: a list of 5,000 items is megabytes of text. */
+/**
+ * A kept list and its JSON body, written and encoded once: a list of 5,000 items is megabytes
+ * of text, and twenty readers of one list would otherwise serialize and encode it twenty times.
+ */
 interface Kept {
 	list: RankedSavings;
-	json: string;
+	body: Uint8Array<ArrayBuffer>;
 }
+
+const encoder = new TextEncoder();
 
 const kept = viewCache<Kept>({
 	maxSize: SAVINGS_CACHE_ITEMS,
@@ -45,7 +50,7 @@ async function keptSavings(
 	);
 	const value = await kept(key, async () => {
 		const list = await rankedSavings(db, await readFigures(db, surveyId, chosen), rank);
-		return { list, json: JSON.stringify(list) };
+		return { list, body: encoder.encode(JSON.stringify(list)) };
 	});
 	return { ok: true, kept: value };
 }
@@ -63,13 +68,13 @@ export async function surveySavings(
 	return out?.ok ? { ok: true, list: out.kept.list } : out;
 }
 
-/** The same list as the API's JSON body (serialized once per kept list). */
+/** The same list as the API's JSON body, UTF-8 (serialized once per kept list). */
 export async function surveySavingsJson(
 	surveyId: string,
 	reader: Reader,
 	rank: SavingsRank,
 	asked?: number
-): Promise<{ ok: true; json: string } | { ok: false; message: string } | null> {
+): Promise<{ ok: true; body: Uint8Array<ArrayBuffer> } | { ok: false; message: string } | null> {
 	const out = await keptSavings(surveyId, reader, rank, asked);
-	return out?.ok ? { ok: true, json: out.kept.json } : out;
+	return out?.ok ? { ok: true, body: out.kept.body } : out;
 }

@@ -21,7 +21,11 @@ export const GET: RequestHandler = async (event) => {
 	const out = await surveySavingsJson(survey.id, reader, read.query.rank, read.query.revision);
 	if (!out) error(404, 'Not found.');
 	if (!out.ok) error(404, out.message);
-	return new Response(out.json, {
-		headers: { 'content-type': 'application/json', 'cache-control': 'private, no-store' }
+	return new Response(out.body, {
+		headers: {
+			'content-type': 'application/json',
+			'content-length': String(out.body.byteLength),
+			'cache-control': 'private, no-store'
+		}
 	});
 };
