@@ -470,7 +470,25 @@ describe('kept lists and the cut at 5,000', () => {
 		for (let k = 0; k < COUNT; k += 1_000) {
 			await db.insert(schema.findings).values(rows.slice(k, k + 1_000));
 		}
-		const body = await list('rank=savings', consultantA, bigSurvey);
+		// 500 unless asked for more; at most 5,000.
+		const first = await list('rank=savings', consultantA, bigSurvey);
+		expect(first.items).toHaveLength(500);
+		expect(first.truncated).toBe(true);
+		expect(first.totals.count).toBe(COUNT);
+		// The Pareto curve is sampled over the whole ranking and ends on the totals.
+		expect(first.pareto.length).toBeLessThanOrEqual(201);
+		expect(first.pareto.at(-1)).toEqual({
+			rank: COUNT,
+			cumulativeSavingMinor: first.totals.costMinor,
+			cumulativeRepairCostMinor: first.totals.repairCostMinor
+		});
+		for (const [k, p] of first.pareto.entries()) {
+			if (k > 0) expect(p.rank).toBeGreaterThan(first.pareto[k - 1].rank);
+			if (p.rank <= 500) {
+				expect(p.cumulativeSavingMinor).toBe(first.items[p.rank - 1].cumulativeSavingMinor);
+			}
+		}
+		const body = await list('rank=savings&limit=5000', consultantA, bigSurvey);
 		expect(body.truncated).toBe(true);
 		expect(body.items).toHaveLength(5_000);
 		expect(body.totals.count).toBe(COUNT);
@@ -592,8 +610,14 @@ describe('GET /api/surveys/[id]/savings: parameters and who may see it', () => {
 		});
 		expect(await get('rank=savings&page=2')).toMatchObject({
 			status: 400,
-			body: { message: 'Unknown parameter page: the savings list takes only rank and revision' }
+			body: { message: 'Unknown parameter page: the savings list takes only rank, revision and limit' }
 		});
+		for (const limit of ['0', '5001', 'ten', '2.5']) {
+			expect(await get(`limit=${limit}`)).toMatchObject({
+				status: 400,
+				body: { message: 'limit must be a whole number from 1 to 5,000' }
+			});
+		}
 		expect(await get('rank=savings&rank=co2')).toMatchObject({
 			status: 400,
 			body: { message: 'Give rank only once.' }

@@ -16,20 +16,34 @@ export const SAVINGS_RANK_LABELS: Record<SavingsRank, string> = {
 	co2: 'CO2 avoided'
 };
 
-/** Most items one answer lists; the totals still count every saving finding. */
+/** Most items one answer lists (`limit`); the totals still count every saving finding. */
 export const MAX_SAVINGS_ITEMS = 5_000;
+/** Items an answer lists unless `limit` asks for more (or fewer). */
+export const DEFAULT_SAVINGS_ITEMS = 500;
+/** Points of the answer's Pareto curve at most: every k-th of the ranking, and the last. */
+export const SAVINGS_PARETO_POINTS = 200;
 
 export const savingsQuerySchema = z.strictObject(
 	{
 		rank: z
 			.enum(SAVINGS_RANKS, { error: `rank must be one of: ${SAVINGS_RANKS.join(', ')}` })
 			.default('savings'),
-		revision: revisionParam
+		revision: revisionParam,
+		limit: z
+			.string()
+			.regex(/^\d{1,5}$/, {
+				error: `limit must be a whole number from 1 to ${MAX_SAVINGS_ITEMS.toLocaleString('en-GB')}`
+			})
+			.transform(Number)
+			.refine((n) => n >= 1 && n <= MAX_SAVINGS_ITEMS, {
+				error: `limit must be a whole number from 1 to ${MAX_SAVINGS_ITEMS.toLocaleString('en-GB')}`
+			})
+			.default(DEFAULT_SAVINGS_ITEMS)
 	},
 	{
 		error: (issue) =>
 			issue.code === 'unrecognized_keys'
-				? `Unknown parameter ${issue.keys.join(', ')}: the savings list takes only rank and revision`
+				? `Unknown parameter ${issue.keys.join(', ')}: the savings list takes only rank, revision and limit`
 				: undefined
 	}
 );

@@ -37,7 +37,7 @@ export async function savingsPage(
 			.where(eq(surveys.id, surveyId))
 			.limit(1),
 		unitSystemOf(db, userId),
-		surveySavings(surveyId, 'staff', rank, revision)
+		surveySavings(surveyId, 'staff', { rank, revision })
 	]);
 	if (!survey || !list) return null;
 	if (!list.ok) return { missing: list.message };

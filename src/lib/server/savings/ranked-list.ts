@@ -99,6 +99,56 @@ function ranking(c: RankColumns, rank: SavingsRank) {
 	};
 }
 
+/** A point of the Pareto curve: the running sums after the item at `rank`. */
+export interface ParetoSample {
+	rank: number;
+	cumulativeSavingMinor: number;
+	cumulativeRepairCostMinor: number;
+}
+
+/**
+ * Every k-th point of a ranking's running sums, and its last (k so that at most `points` come
+ * back): the Pareto curve of a list of any length in one statement, never every row.
+ */
+export async function sampledRunningSums(
+	db: Executor,
+	source: { table: typeof F | typeof S; cols: RankColumns; where: SQL },
+	rank: SavingsRank,
+	count: number,
+	points: number
+): Promise<ParetoSample[]> {
+	if (count === 0) return [];
+	const stride = Math.max(1, Math.ceil(count / points));
+	const sums = ranking(source.cols, rank);
+	const ranked = db
+		.select({ place: sums.place, saving: sums.cumulativeSaving, repair: sums.cumulativeRepair })
+		.from(source.table)
+		.where(source.where)
+		.as('ranked');
+	const rows = await db
+		.select({ place: ranked.place, saving: ranked.saving, repair: ranked.repair })
+		.from(ranked)
+		.where(sql`MOD(${ranked.place}, ${stride}) = 0 OR ${ranked.place} = ${count}`)
+		.orderBy(asc(ranked.place));
+	return rows.map((r) => ({
+		rank: Number(r.place),
+		cumulativeSavingMinor: Number(r.saving),
+		cumulativeRepairCostMinor: Number(r.repair)
+	}));
+}
+
+/** The live findings' saving rows, or a revision snapshot's, as a ranking's source. */
+export const liveSource = (survey: { id: string; basisId: string | null }) => ({
+	table: F,
+	cols: F,
+	where: savingFindingSql(survey.id, survey.basisId)
+});
+export const revisionSource = (revisionId: string) => ({
+	table: S,
+	cols: { ...S, id: S.findingId },
+	where: savingSnapshotSql(revisionId)
+});
+
 const placed = (
 	r: ItemColumns & Record<'place' | 'cumulativeSaving' | 'cumulativeRepair', string | number>,
 	currency: string

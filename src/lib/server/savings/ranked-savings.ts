@@ -5,12 +5,24 @@
  * live findings until the survey is published. All SQL over typed figure columns: the ranking
  * (window sums, cut to MAX_SAVINGS_ITEMS), the grouped totals, the measures' sums.
  */
-import { MAX_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
+import {
+	DEFAULT_SAVINGS_ITEMS,
+	SAVINGS_PARETO_POINTS,
+	type SavingsRank
+} from '../../schemas/savings';
 import type { Executor } from '../db/types';
 import type { MeasureRow } from '../measures/sums';
 import { choiceWords, type FigureChoice, type Reader } from '../publish/choose';
 import { chosenFigures, type ChosenFigures } from '../publish/figures';
-import { rankedItems, rankedRevisionItems, type SavingsItem } from './ranked-list';
+import {
+	liveSource,
+	rankedItems,
+	rankedRevisionItems,
+	revisionSource,
+	sampledRunningSums,
+	type ParetoSample,
+	type SavingsItem
+} from './ranked-list';
 import type { SavingsBreakdown, SavingsTotals, WholeEconomics } from './totals';
 
 export type { SavingsItem, SavingsBreakdown, SavingsTotals, WholeEconomics };
@@ -32,11 +44,13 @@ export interface RankedSavings {
 	rank: SavingsRank;
 	figures: FiguresShown;
 	items: SavingsItem[];
+	/** The running sums at most SAVINGS_PARETO_POINTS places of the whole ranking, and its last. */
+	pareto: ParetoSample[];
 	/** The measures (jobs of several findings) in the same order: saving, payback or CO2. */
 	measures: RankedMeasure[];
 	totals: SavingsTotals & { economics: WholeEconomics | null };
 	breakdown: SavingsBreakdown;
-	/** More saving findings than MAX_SAVINGS_ITEMS: only the first are listed (totals are of all). */
+	/** More saving findings than listed (`limit`): only the first are (totals are of all). */
 	truncated: boolean;
 	/** Live findings left out because their figures are out of date (as totals.outOfDate). */
 	outOfDate: number;
@@ -62,12 +76,17 @@ export function rankMeasures(measures: MeasureRow[], rank: SavingsRank): RankedM
 export async function rankedSavings(
 	db: Executor,
 	figures: ChosenFigures,
-	rank: SavingsRank
+	rank: SavingsRank,
+	limit = DEFAULT_SAVINGS_ITEMS
 ): Promise<RankedSavings> {
 	const { choice, revision, totals, currency } = figures;
-	const items = revision
-		? await rankedRevisionItems(db, { id: revision.id, currency }, rank, MAX_SAVINGS_ITEMS)
-		: await rankedItems(db, figures.pricing, rank, MAX_SAVINGS_ITEMS);
+	const source = revision ? revisionSource(revision.id) : liveSource(figures.pricing);
+	const [items, pareto] = await Promise.all([
+		revision
+			? rankedRevisionItems(db, { id: revision.id, currency }, rank, limit)
+			: rankedItems(db, figures.pricing, rank, limit),
+		sampledRunningSums(db, source, rank, totals.count, SAVINGS_PARETO_POINTS)
+	]);
 	return {
 		rank,
 		figures: {
@@ -78,6 +97,7 @@ export async function rankedSavings(
 				: null
 		},
 		items,
+		pareto,
 		measures: rankMeasures(figures.measures, rank),
 		totals,
 		breakdown: figures.breakdown,
@@ -94,9 +114,10 @@ export async function readerSavings(
 	surveyId: string,
 	reader: Reader,
 	rank: SavingsRank,
-	asked?: number
+	asked?: number,
+	limit?: number
 ): Promise<SavingsOutcome | null> {
 	const chosen = await chosenFigures(db, surveyId, reader, asked);
 	if (!chosen?.ok) return chosen;
-	return { ok: true, list: await rankedSavings(db, chosen.figures, rank) };
+	return { ok: true, list: await rankedSavings(db, chosen.figures, rank, limit) };
 }

@@ -6,7 +6,7 @@
  * key is its number; live figures are keyed on the basis they count as current and the firm's
  * change counter as read before the queries ran (every write the list can show moves it).
  */
-import type { SavingsRank } from '../../schemas/savings';
+import { DEFAULT_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
 import { db } from '../db';
 import { viewCache } from '../desk/findings-cache';
 import type { Reader } from '../publish/choose';
@@ -34,22 +34,28 @@ const kept = viewCache<Kept>({
 
 export type KeptOutcome = { ok: true; kept: Kept } | { ok: false; message: string };
 
+/** What a list is asked for: the order, an earlier revision, how many items. */
+export interface SavingsAsk {
+	rank: SavingsRank;
+	revision?: number;
+	limit?: number;
+}
+
 async function keptSavings(
 	surveyId: string,
 	reader: Reader,
-	rank: SavingsRank,
-	asked?: number
+	{ rank, revision: asked, limit = DEFAULT_SAVINGS_ITEMS }: SavingsAsk
 ): Promise<KeptOutcome | null> {
 	const chosen = await figureChoice(db, surveyId, reader, asked);
 	if (!chosen?.ok) return chosen;
 	const { choice, pricing } = chosen;
 	const key = JSON.stringify(
 		choice.kind === 'revision'
-			? [surveyId, choice, rank]
-			: [surveyId, choice, pricing.basisId, pricing.revision, rank]
+			? [surveyId, choice, rank, limit]
+			: [surveyId, choice, pricing.basisId, pricing.revision, rank, limit]
 	);
 	const value = await kept(key, async () => {
-		const list = await rankedSavings(db, await readFigures(db, surveyId, chosen), rank);
+		const list = await rankedSavings(db, await readFigures(db, surveyId, chosen), rank, limit);
 		return { list, body: encoder.encode(JSON.stringify(list)) };
 	});
 	return { ok: true, kept: value };
@@ -61,10 +67,9 @@ export type ListOutcome = { ok: true; list: RankedSavings } | { ok: false; messa
 export async function surveySavings(
 	surveyId: string,
 	reader: Reader,
-	rank: SavingsRank,
-	asked?: number
+	ask: SavingsAsk
 ): Promise<ListOutcome | null> {
-	const out = await keptSavings(surveyId, reader, rank, asked);
+	const out = await keptSavings(surveyId, reader, ask);
 	return out?.ok ? { ok: true, list: out.kept.list } : out;
 }
 
@@ -72,9 +77,8 @@ export async function surveySavings(
 export async function surveySavingsJson(
 	surveyId: string,
 	reader: Reader,
-	rank: SavingsRank,
-	asked?: number
+	ask: SavingsAsk
 ): Promise<{ ok: true; body: Uint8Array<ArrayBuffer> } | { ok: false; message: string } | null> {
-	const out = await keptSavings(surveyId, reader, rank, asked);
+	const out = await keptSavings(surveyId, reader, ask);
 	return out?.ok ? { ok: true, body: out.kept.body } : out;
 }

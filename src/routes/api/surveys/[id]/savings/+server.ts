@@ -18,7 +18,7 @@ export const GET: RequestHandler = async (event) => {
 	const read = readSavingsQuery(event.url.searchParams);
 	if (!read.ok) error(400, read.message);
 	const reader = user.role === 'client' ? 'client' : 'staff';
-	const out = await surveySavingsJson(survey.id, reader, read.query.rank, read.query.revision);
+	const out = await surveySavingsJson(survey.id, reader, read.query);
 	if (!out) error(404, 'Not found.');
 	if (!out.ok) error(404, out.message);
 	return new Response(out.body, {
