@@ -610,7 +610,9 @@ describe('GET /api/surveys/[id]/savings: parameters and who may see it', () => {
 		});
 		expect(await get('rank=savings&page=2')).toMatchObject({
 			status: 400,
-			body: { message: 'Unknown parameter page: the savings list takes only rank, revision and limit' }
+			body: {
+				message: 'Unknown parameter page: the savings list takes only rank, revision and limit'
+			}
 		});
 		for (const limit of ['0', '5001', 'ten', '2.5']) {
 			expect(await get(`limit=${limit}`)).toMatchObject({
