@@ -19,7 +19,9 @@ export const SAVINGS_RANK_LABELS: Record<SavingsRank, string> = {
 /** Most items one answer lists (`limit`); the totals still count every saving finding. */
 export const MAX_SAVINGS_ITEMS = 5_000;
 /** Items an answer lists unless `limit` asks for more (or fewer). */
-export const DEFAULT_SAVINGS_ITEMS = 500;
+export const DEFAULT_SAVINGS_ITEMS = 100;
+/** Items the Desk's savings page lists. */
+export const PAGE_SAVINGS_ITEMS = 500;
 /** Points of the answer's Pareto curve at most: every k-th of the ranking, and the last. */
 export const SAVINGS_PARETO_POINTS = 200;
 

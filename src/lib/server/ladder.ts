@@ -7,6 +7,9 @@ import { db } from './db';
 import { sites, surveys } from './db/schema';
 import { surveyScope } from './policy';
 import { ladderSurvey } from './publish/revisions';
+import type { LadderQuery } from '../schemas/ladder';
+import { clientCompanies } from './db/schema';
+import { companiesWithPublications, companySavings } from './savings/company';
 import { unitSystemOf } from './walk/person';
 
 /** Published surveys this person may see, newest publication first. */
@@ -34,4 +37,38 @@ export async function ladderSurveyPage(user: SessionUser, surveyId: string, limi
 		unitSystemOf(db, user.id)
 	]);
 	return survey && { ...survey, unitSystem, limit };
+}
+
+/**
+ * The Ladder's ranked list (docs/ladder.md): a client user's own company; the firm's admins and
+ * consultants pick one of their client companies with a publication (`company`, the first by
+ * name unless asked). Null for a client user without a company.
+ */
+export async function ladderPage(user: SessionUser, q: LadderQuery) {
+	const [unitSystem, companies] = await Promise.all([
+		unitSystemOf(db, user.id),
+		user.role === 'client' ? Promise.resolve([]) : companiesWithPublications(db, user.firmId)
+	]);
+	let company: { id: string; name: string } | undefined;
+	if (user.role === 'client') {
+		if (!user.clientCompanyId) return null;
+		[company] = await db
+			.select({ id: clientCompanies.id, name: clientCompanies.name })
+			.from(clientCompanies)
+			.where(
+				and(eq(clientCompanies.id, user.clientCompanyId), eq(clientCompanies.firmId, user.firmId))
+			);
+	} else {
+		company = companies.find((c) => c.id === q.company) ?? companies[0];
+	}
+	const list = company
+		? await companySavings(db, user.firmId, company, {
+				rank: q.rank,
+				site: q.site,
+				area: q.area,
+				kind: q.kind,
+				page: q.page
+			})
+		: null;
+	return { unitSystem, companies, list };
 }

@@ -4,7 +4,7 @@
  * `GET /api/surveys/[id]/savings` answers (surveySavings, docs/savings.md).
  */
 import { eq } from 'drizzle-orm';
-import type { SavingsRank } from '../../schemas/savings';
+import { PAGE_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
 import type { UnitSystemId } from '../../units';
 import { db } from '../db';
 import { surveys } from '../db/schema';
@@ -37,7 +37,7 @@ export async function savingsPage(
 			.where(eq(surveys.id, surveyId))
 			.limit(1),
 		unitSystemOf(db, userId),
-		surveySavings(surveyId, 'staff', { rank, revision })
+		surveySavings(surveyId, 'staff', { rank, revision, limit: PAGE_SAVINGS_ITEMS })
 	]);
 	if (!survey || !list) return null;
 	if (!list.ok) return { missing: list.message };

@@ -57,6 +57,7 @@ export interface LadderItem extends SavingsItem {
 export interface CompanyTotals {
 	count: number;
 	steamKgH: number;
+	heatKw: number;
 	fuelGjYear: number;
 	costMinor: number;
 	co2KgYear: number;
@@ -204,6 +205,7 @@ async function paretoSample(db: Executor, revisionIds: string[], f: CompanyFilte
 const noTotals = (currency: string): CompanyTotals => ({
 	count: 0,
 	steamKgH: 0,
+	heatKw: 0,
 	fuelGjYear: 0,
 	costMinor: 0,
 	co2KgYear: 0,
@@ -223,6 +225,7 @@ async function aggregate(db: Executor, revisionIds: string[], f: CompanyFilters,
 			area: S.areaName,
 			count: sql<number>`COUNT(*)`,
 			steam: sql<number>`SUM(${S.steamLoss})`,
+			heat: sql<number>`SUM(${S.heatLoss})`,
 			fuel: sql<number>`SUM(${S.fuelEnergy})`,
 			cost: sql<number>`SUM(${S.cost})`,
 			co2: sql<number>`SUM(${S.co2})`,
@@ -239,6 +242,7 @@ async function aggregate(db: Executor, revisionIds: string[], f: CompanyFilters,
 	for (const g of groups) {
 		totals.count += num(g.count);
 		totals.steamKgH += num(g.steam);
+		totals.heatKw += num(g.heat);
 		totals.fuelGjYear += num(g.fuel);
 		totals.costMinor += num(g.cost);
 		totals.co2KgYear += num(g.co2);
