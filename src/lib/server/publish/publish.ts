@@ -14,18 +14,16 @@
  * correction is published with its note.
  */
 import { and, count, eq, isNull, max, sql } from 'drizzle-orm';
-import { randomUUID } from 'node:crypto';
 import { recordChange } from '../audit';
 import { db as appDb } from '../db';
 import { findingConflicts, findings, surveyRevisions, surveys } from '../db/schema';
 import type { Db, Tx } from '../db/types';
 import { surveyPricing } from '../desk/findings-query';
 import { freezeSurveyBasis } from '../pricing/cost-basis';
-import { savingsTotals } from '../savings/totals';
 import { bumpSurvey, lockSurvey } from '../survey-row';
 import { notifyClient, type Notified } from './notify';
 import { publishProblem, type Problem } from './readiness';
-import { writeMeasuresSnapshot, writeSnapshot } from './snapshot';
+import { writeRevision } from './revision-write';
 
 export interface Actor {
 	id: string;
@@ -97,30 +95,16 @@ export async function publishSurvey(
 			});
 			if (problem) throw new Refused(problem);
 			const basisId = (await freezeSurveyBasis(tx, row.id))!;
-			const { totals } = await savingsTotals(tx, {
-				id: row.id,
-				basisId,
-				currency: pricing!.currency
-			});
-			const revisionId = randomUUID();
 			const now = new Date();
-			await tx.insert(surveyRevisions).values({
-				id: revisionId,
+			const { revisionId, totals, copied } = await writeRevision(tx, {
 				surveyId: row.id,
 				number: nextRevision,
-				publishedAt: now,
-				publishedBy: actor.id,
-				costBasisId: basisId,
+				basisId,
+				currency: pricing!.currency,
+				actorId: actor.id,
 				note: note === '' ? null : note,
-				totals,
-				findingCount: 0
+				at: now
 			});
-			const copied = await writeSnapshot(tx, revisionId, row.id, basisId);
-			await writeMeasuresSnapshot(tx, revisionId, row.id);
-			await tx
-				.update(surveyRevisions)
-				.set({ findingCount: copied })
-				.where(eq(surveyRevisions.id, revisionId));
 			await tx
 				.update(surveys)
 				.set({

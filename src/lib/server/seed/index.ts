@@ -7,6 +7,7 @@ import { renameOldDemoPlaces } from './renames';
 import { seedCosts } from './seed-costs';
 import { seedConflicts, seedMaltings } from './seed-desk';
 import { seedDemoFindings } from './seed-findings';
+import { seedPublishedRevisions } from './seed-revisions';
 
 /**
  * Writes the demo scenario. Idempotent: rows have fixed ids and existing rows are left as
@@ -60,4 +61,5 @@ export async function seedDemo(db: Db): Promise<void> {
 	await seedMaltings(db);
 	await seedConflicts(db);
 	await seedCosts(db);
+	await seedPublishedRevisions(db);
 }
