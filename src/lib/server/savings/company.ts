@@ -20,7 +20,13 @@ import {
 import type { Executor } from '../db/types';
 import { viewCache } from '../desk/findings-cache';
 import { kindWords } from '../finding-words';
-import { rankOrder, savingsItem, type SavingsItem } from './ranked-list';
+import {
+	rankOrder,
+	ranking,
+	sampledRunningSums,
+	savingsItem,
+	type SavingsItem
+} from './ranked-list';
 import { into, type SavingsBreakdown, type SavingsGroup } from './totals';
 
 /** Items on one page of the Ladder's list. */
@@ -142,8 +148,6 @@ const where = (revisionIds: string[], f: CompanyFilters): SQL =>
 const cols = { ...S, id: S.findingId };
 
 async function page(db: Executor, revisionIds: string[], f: CompanyFilters) {
-	const orderBy = sql`ORDER BY ${sql.join(rankOrder(cols, f.rank), sql`, `)}`;
-	const over = sql`OVER (${orderBy} ROWS BETWEEN UNBOUNDED PRECEDING AND CURRENT ROW)`;
 	return db
 		.select({
 			revisionId: S.revisionId,
@@ -164,42 +168,13 @@ async function page(db: Executor, revisionIds: string[], f: CompanyFilters) {
 			repairCostMinor: S.repairCost,
 			paybackYears: S.paybackYears,
 			measureId: S.measureId,
-			place: sql<number>`ROW_NUMBER() OVER (${orderBy})`,
-			saving: sql<number>`SUM(${S.cost}) ${over}`,
-			repair: sql<number>`SUM(COALESCE(${S.repairCost}, 0)) ${over}`
+			...ranking(cols, f.rank)
 		})
 		.from(S)
 		.where(where(revisionIds, f))
 		.orderBy(...rankOrder(cols, f.rank))
 		.limit(LADDER_PAGE_ITEMS)
 		.offset((f.page - 1) * LADDER_PAGE_ITEMS);
-}
-
-/** Every k-th point of the ranking by saving (and the last): the Pareto curve, sampled in SQL. */
-async function paretoSample(db: Executor, revisionIds: string[], f: CompanyFilters, n: number) {
-	if (n === 0) return [];
-	const stride = Math.max(1, Math.ceil(n / LADDER_PARETO_POINTS));
-	const orderBy = sql`ORDER BY ${S.cost} DESC, ${S.findingId}`;
-	const over = sql`OVER (${orderBy} ROWS BETWEEN UNBOUNDED PRECEDING AND CURRENT ROW)`;
-	const ranked = db
-		.select({
-			place: sql<number>`ROW_NUMBER() OVER (${orderBy})`.as('place'),
-			saving: sql<number>`SUM(${S.cost}) ${over}`.as('saving'),
-			repair: sql<number>`SUM(COALESCE(${S.repairCost}, 0)) ${over}`.as('repair')
-		})
-		.from(S)
-		.where(where(revisionIds, f))
-		.as('ranked');
-	const rows = await db
-		.select({ place: ranked.place, saving: ranked.saving, repair: ranked.repair })
-		.from(ranked)
-		.where(sql`MOD(${ranked.place}, ${stride}) = 0 OR ${ranked.place} = ${n}`)
-		.orderBy(asc(ranked.place));
-	return rows.map((r) => ({
-		rank: num(r.place),
-		cumulativeSavingMinor: num(r.saving),
-		cumulativeRepairCostMinor: num(r.repair)
-	}));
 }
 
 const noTotals = (currency: string): CompanyTotals => ({
@@ -320,7 +295,15 @@ export async function companySavings(
 		const [rows, { totals, breakdown }] = empty
 			? [[], { totals: noTotals(currency), breakdown: { kind: [], area: [] } }]
 			: await Promise.all([page(db, revisionIds, f), aggregate(db, revisionIds, f, currency)]);
-		const pareto = empty ? [] : await paretoSample(db, revisionIds, f, totals.count);
+		const pareto = empty
+			? []
+			: await sampledRunningSums(
+					db,
+					{ table: S, cols, where: where(revisionIds, f) },
+					f.rank,
+					totals.count,
+					LADDER_PARETO_POINTS
+				);
 		const bySurvey = new Map(shown.map((s) => [s.revisionId, s]));
 		return {
 			shown,
@@ -331,8 +314,8 @@ export async function companySavings(
 				return {
 					...savingsItem(r, s.currency, {
 						rank: num(r.place),
-						saving: num(r.saving),
-						repair: num(r.repair)
+						saving: num(r.cumulativeSaving),
+						repair: num(r.cumulativeRepair)
 					}),
 					surveyId: s.surveyId,
 					survey: s.name,

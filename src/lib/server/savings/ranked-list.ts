@@ -86,7 +86,7 @@ export const rankOrder = (c: RankColumns, rank: SavingsRank): SQL[] =>
 	})[rank];
 
 /** A row's place and the running sums of saving and repair cost in rank order. */
-function ranking(c: RankColumns, rank: SavingsRank) {
+export function ranking(c: RankColumns, rank: SavingsRank) {
 	const orderBy = sql`ORDER BY ${sql.join(rankOrder(c, rank), sql`, `)}`;
 	// Running sums row by row (the order is total, so no two rows share a place).
 	const over = sql`OVER (${orderBy} ROWS BETWEEN UNBOUNDED PRECEDING AND CURRENT ROW)`;
