@@ -33,3 +33,24 @@ export function freshBenchDatabase(name: string): { done: () => void } {
 	run('npx', ['tsx', 'scripts/seed.ts']);
 	return { done: () => (wasRunning ? undefined : run('bash', ['scripts/db.sh', 'stop'])) };
 }
+
+/** Signs in through the sign-in form like a browser; the session cookie ("name=value"). */
+export async function benchSignIn(
+	origin: string,
+	email: string,
+	password: string
+): Promise<string> {
+	const res = await fetch(`${origin}/signin`, {
+		method: 'POST',
+		redirect: 'manual',
+		headers: { origin, 'content-type': 'application/x-www-form-urlencoded' },
+		body: new URLSearchParams({ email, password })
+	});
+	const cookie = res.headers.getSetCookie().find((c) => c.startsWith('steamwisp_session='));
+	if (!cookie) throw new Error(`Sign-in failed (${res.status})`);
+	return cookie.split(';')[0];
+}
+
+/** The p-th percentile of sorted figures (nearest rank). */
+export const percentile = (sorted: number[], p: number) =>
+	sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];

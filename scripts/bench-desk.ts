@@ -31,7 +31,7 @@ import { touchFirm } from '../src/lib/server/sync/counter';
 import { creameryAreas } from '../src/lib/server/seed/areas';
 import { demoFirms, demoPassword, demoSites, demoUsers } from '../src/lib/server/seed/demo';
 import { creameryCostBasis } from '../src/lib/server/seed/findings';
-import { freshBenchDatabase, run, waitForApp } from './bench-app';
+import { freshBenchDatabase, run, waitForApp, benchSignIn, percentile } from './bench-app';
 import { insertBenchFindings, insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
@@ -100,20 +100,7 @@ async function bigSiteFixtures() {
 	return performance.now() - t0;
 }
 
-async function signIn(): Promise<string> {
-	const res = await fetch(`${ORIGIN}/signin`, {
-		method: 'POST',
-		redirect: 'manual',
-		headers: { origin: ORIGIN, 'content-type': 'application/x-www-form-urlencoded' },
-		body: new URLSearchParams({ email: CONSULTANT, password: demoPassword })
-	});
-	const cookie = res.headers.getSetCookie().find((c) => c.startsWith('steamwisp_session='));
-	if (!cookie) throw new Error(`Sign-in failed (${res.status})`);
-	return cookie.split(';')[0];
-}
-
-const percentile = (sorted: number[], p: number) =>
-	sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+const signIn = () => benchSignIn(ORIGIN, CONSULTANT, demoPassword);
 
 const tablePath = (query: string) => `/api/surveys/${tableSurvey}/findings${query}`;
 

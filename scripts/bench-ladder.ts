@@ -24,7 +24,7 @@ import { surveyPricing } from '../src/lib/server/desk/findings-query';
 import { freezeSurveyBasis } from '../src/lib/server/pricing/cost-basis';
 import { writeRevision } from '../src/lib/server/publish/revision-write';
 import { demoFirms, demoPassword, demoSites, demoUsers } from '../src/lib/server/seed/demo';
-import { freshBenchDatabase, run, waitForApp } from './bench-app';
+import { freshBenchDatabase, run, waitForApp, benchSignIn, percentile } from './bench-app';
 import { insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
@@ -88,20 +88,8 @@ async function fixtures() {
 	return performance.now() - t0;
 }
 
-async function signIn(): Promise<string> {
-	const res = await fetch(`${ORIGIN}/signin`, {
-		method: 'POST',
-		redirect: 'manual',
-		headers: { origin: ORIGIN, 'content-type': 'application/x-www-form-urlencoded' },
-		body: new URLSearchParams({ email: CLIENT, password: demoPassword })
-	});
-	const cookie = res.headers.getSetCookie().find((c) => c.startsWith('steamwisp_session='));
-	if (!cookie) throw new Error(`Sign-in failed (${res.status})`);
-	return cookie.split(';')[0];
-}
+const signIn = () => benchSignIn(ORIGIN, CLIENT, demoPassword);
 
-const percentile = (sorted: number[], p: number) =>
-	sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
 const ms = (v: number) => `${v.toFixed(1).padStart(6)} ms`;
 
 async function load(cookie: string, path: string) {

@@ -13,7 +13,7 @@
  */
 import 'fake-indexeddb/auto';
 import { spawn } from 'node:child_process';
-import { waitForApp } from './bench-app';
+import { waitForApp, benchSignIn } from './bench-app';
 import { createHash } from 'node:crypto';
 import { mkdtempSync, readFileSync } from 'node:fs';
 import { createServer } from 'node:http';
@@ -55,17 +55,7 @@ function appCpu(): number {
 	return (Number(fields[11]) + Number(fields[12])) / 100;
 }
 
-async function signIn(): Promise<string> {
-	const res = await fetch(`${ORIGIN}/signin`, {
-		method: 'POST',
-		redirect: 'manual',
-		headers: { origin: ORIGIN, 'content-type': 'application/x-www-form-urlencoded' },
-		body: new URLSearchParams({ email: AUDITOR, password: demoPassword })
-	});
-	const cookie = res.headers.getSetCookie().find((c) => c.startsWith('steamwisp_session='));
-	if (!cookie) throw new Error(`Sign-in failed (${res.status})`);
-	return cookie.split(';')[0];
-}
+const signIn = () => benchSignIn(ORIGIN, AUDITOR, demoPassword);
 
 /** What the device sent: push body sizes, and the app's CPU when the first photo went. */
 const wire = {

@@ -5,6 +5,7 @@ import { maltingsClientUser } from '../../src/lib/server/seed/maltings';
 import { pdfPages } from '../support/pdf-text';
 import { openTestDb, rows, type Db } from './support/db';
 import { linkIn, waitForMail } from './support/mailbox';
+import { brackenford, unpublishBrackenford } from './support/brackenford';
 import { signInHere } from './support/worker';
 
 /**
@@ -15,7 +16,6 @@ import { signInHere } from './support/worker';
  * in; the client downloads the PDF report from there, and it opens as revision 1 with the
  * measure's page in it. Afterwards the survey goes back to its seeded state.
  */
-const brackenford = '5e7a0006-0000-4000-8000-000000000004';
 const consultant = demoUsers.find(
 	(u) => u.role === 'consultant' && u.email.includes('cinderbrook')
 )!;
@@ -33,18 +33,7 @@ test.afterAll(async () => {
 		await rows(db, 'UPDATE findings SET measure_id = ? WHERE id = ?', [f.measure_id, f.id]);
 	}
 	await rows(db, 'DELETE FROM measures WHERE survey_id = ? AND name = ?', [brackenford, MEASURE]);
-	await rows(db, 'DELETE FROM survey_revisions WHERE survey_id = ?', [brackenford]);
-	await rows(
-		db,
-		`UPDATE surveys SET status = 'in-review', published_at = NULL, cost_basis_id = NULL
-		 WHERE id = ?`,
-		[brackenford]
-	);
-	await rows(
-		db,
-		'UPDATE change_counters SET value = value + 1 WHERE firm_id = (SELECT firm_id FROM surveys WHERE id = ?)',
-		[brackenford]
-	);
+	await unpublishBrackenford(db);
 	await db?.end();
 });
 

@@ -12,7 +12,12 @@ import { and, asc, desc, eq, gt, lt, sql, type AnyColumn } from 'drizzle-orm';
 import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
 import type { Executor } from '../db/types';
 import type { SavingsItem } from '../savings/ranked-list';
-import { savingFindingSql, savingsItem, type ItemColumns } from '../savings/ranked-list';
+import {
+	savingFindingSql,
+	savingsItem,
+	snapshotItemColumns,
+	type ItemColumns
+} from '../savings/ranked-list';
 import type { ReportContent } from './content';
 import { savingSnapshotSql } from '../publish/snapshot';
 
@@ -97,23 +102,7 @@ function revisionPage(
 ) {
 	return db
 		.select({
-			id: S.findingId,
-			kind: S.kind,
-			tag: S.tag,
-			location: S.location,
-			area: S.areaName,
-			header: S.headerName,
-			condition: S.condition,
-			status: S.status,
-			steamKgH: S.steamLoss,
-			heatKw: S.heatLoss,
-			fuelGjYear: S.fuelEnergy,
-			costMinor: S.cost,
-			co2KgYear: S.co2,
-			waterM3Year: S.water,
-			repairCostMinor: S.repairCost,
-			paybackYears: S.paybackYears,
-			measureId: S.measureId,
+			...snapshotItemColumns,
 			publishedVersion: S.findingVersion
 		})
 		.from(S)

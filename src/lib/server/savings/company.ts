@@ -25,9 +25,10 @@ import {
 	ranking,
 	sampledRunningSums,
 	savingsItem,
+	snapshotItemColumns,
 	type SavingsItem
 } from './ranked-list';
-import { into, type SavingsBreakdown, type SavingsGroup } from './totals';
+import { into, type SavingsBreakdown, type SavingsGroup, type SavingsTotals } from './totals';
 
 /** Items on one page of the Ladder's list. */
 export const LADDER_PAGE_ITEMS = 50;
@@ -60,19 +61,21 @@ export interface LadderItem extends SavingsItem {
 	site: string;
 }
 
-export interface CompanyTotals {
-	count: number;
-	steamKgH: number;
-	heatKw: number;
-	fuelGjYear: number;
-	costMinor: number;
-	co2KgYear: number;
-	waterM3Year: number;
-	repairCostMinor: number;
-	withoutRepairCost: number;
-	paybackYears: number | null;
-	currency: string;
-}
+/** The savings list's totals, of the rows the filters keep. */
+export type CompanyTotals = Pick<
+	SavingsTotals,
+	| 'count'
+	| 'steamKgH'
+	| 'heatKw'
+	| 'fuelGjYear'
+	| 'costMinor'
+	| 'co2KgYear'
+	| 'waterM3Year'
+	| 'repairCostMinor'
+	| 'withoutRepairCost'
+	| 'paybackYears'
+	| 'currency'
+>;
 
 export interface CompanySavings {
 	company: { id: string; name: string };
@@ -151,23 +154,7 @@ async function page(db: Executor, revisionIds: string[], f: CompanyFilters) {
 	return db
 		.select({
 			revisionId: S.revisionId,
-			id: S.findingId,
-			kind: S.kind,
-			tag: S.tag,
-			location: S.location,
-			area: S.areaName,
-			header: S.headerName,
-			condition: S.condition,
-			status: S.status,
-			steamKgH: S.steamLoss,
-			heatKw: S.heatLoss,
-			fuelGjYear: S.fuelEnergy,
-			costMinor: S.cost,
-			co2KgYear: S.co2,
-			waterM3Year: S.water,
-			repairCostMinor: S.repairCost,
-			paybackYears: S.paybackYears,
-			measureId: S.measureId,
+			...snapshotItemColumns,
 			...ranking(cols, f.rank)
 		})
 		.from(S)

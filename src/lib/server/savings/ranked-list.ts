@@ -229,6 +229,27 @@ export async function rankedItems(
 	return rows.map((r) => placed(r, survey.currency));
 }
 
+/** A snapshot row's columns as a listed item reads them (its names are frozen in it). */
+export const snapshotItemColumns = {
+	id: S.findingId,
+	kind: S.kind,
+	tag: S.tag,
+	location: S.location,
+	area: S.areaName,
+	header: S.headerName,
+	condition: S.condition,
+	status: S.status,
+	steamKgH: S.steamLoss,
+	heatKw: S.heatLoss,
+	fuelGjYear: S.fuelEnergy,
+	costMinor: S.cost,
+	co2KgYear: S.co2,
+	waterM3Year: S.water,
+	repairCostMinor: S.repairCost,
+	paybackYears: S.paybackYears,
+	measureId: S.measureId
+};
+
 /**
  * The same ranking over a published revision's frozen snapshot (its names are frozen in it
  * too, so one statement): what the client is shown, never the live findings.
@@ -242,23 +263,7 @@ export async function rankedRevisionItems(
 	const cols = { ...S, id: S.findingId };
 	const rows = await db
 		.select({
-			id: S.findingId,
-			kind: S.kind,
-			tag: S.tag,
-			location: S.location,
-			area: S.areaName,
-			header: S.headerName,
-			condition: S.condition,
-			status: S.status,
-			steamKgH: S.steamLoss,
-			heatKw: S.heatLoss,
-			fuelGjYear: S.fuelEnergy,
-			costMinor: S.cost,
-			co2KgYear: S.co2,
-			waterM3Year: S.water,
-			repairCostMinor: S.repairCost,
-			paybackYears: S.paybackYears,
-			measureId: S.measureId,
+			...snapshotItemColumns,
 			...ranking(cols, rank)
 		})
 		.from(S)
