@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { demoPassword, demoUsers } from '../../src/lib/server/seed/demo';
+import { LADDER_PAGE_ITEMS } from '../../src/lib/server/savings/company';
 import { openTestDb, rows, type Db } from './support/db';
 import { signInHere } from './support/worker';
 
@@ -42,7 +43,7 @@ test('a client reads their ranked repairs, reorders by payback and filters by ki
 			.getByTestId('ladder-list')
 			.locator('li')
 			.evaluateAll((li) => li.map((l) => l.dataset.finding));
-	expect(await shown()).toEqual(frozen.slice(0, 50).map((r) => r.id));
+	expect(await shown()).toEqual(frozen.slice(0, LADDER_PAGE_ITEMS).map((r) => r.id));
 	const total = frozen.reduce((s, r) => s + Number(r.cost), 0);
 	await expect(
 		page.getByText(
@@ -63,7 +64,7 @@ test('a client reads their ranked repairs, reorders by payback and filters by ki
 		 ORDER BY f.payback_years IS NULL, f.payback_years, f.finding_id`,
 		[spring]
 	);
-	expect(await shown()).toEqual(byPayback.slice(0, 50).map((r) => r.id));
+	expect(await shown()).toEqual(byPayback.slice(0, LADDER_PAGE_ITEMS).map((r) => r.id));
 
 	await page.getByTestId('ladder-filters').locator('select[name="kind"]').selectOption('trap');
 	await page.getByTestId('ladder-filters').getByRole('button', { name: 'Show' }).click();
@@ -77,7 +78,7 @@ test('a client reads their ranked repairs, reorders by payback and filters by ki
 		[spring]
 	);
 	await expect(page.getByTestId('ladder-list').locator('li')).toHaveCount(
-		Math.min(50, Number(traps[0].n))
+		Math.min(LADDER_PAGE_ITEMS, Number(traps[0].n))
 	);
 	await expect(page.getByTestId('ladder-list')).not.toContainText('Insulation gap');
 

@@ -9,7 +9,9 @@ import { surveyScope } from './policy';
 import { ladderSurvey } from './publish/revisions';
 import type { LadderQuery } from '../schemas/ladder';
 import { clientCompanies } from './db/schema';
-import { companiesWithPublications, companySavings } from './savings/company';
+import { companiesWithPublications, companySavings, type CompanySavings } from './savings/company';
+import { cellText, paybackWords } from '../figures';
+import type { UnitSystemId } from '../units';
 import { unitSystemOf } from './walk/person';
 
 /** Published surveys this person may see, newest publication first. */
@@ -70,5 +72,32 @@ export async function ladderPage(user: SessionUser, q: LadderQuery) {
 				page: q.page
 			})
 		: null;
-	return { unitSystem, companies, list };
+	return { unitSystem, companies, list: list && slimList(list, unitSystem) };
+}
+
+/**
+ * The list as the page draws it: each item's words and its money already in text (what the
+ * page shows, no more — a page of fifty rows is sent to a phone with its data).
+ */
+function slimList(list: CompanySavings, system: UnitSystemId) {
+	const { items, surveys: _all, ...rest } = list;
+	return {
+		...rest,
+		items: items.map((i) => ({
+			id: i.id,
+			rank: i.rank,
+			kindWords: i.kindWords,
+			tag: i.tag,
+			conditionWords: i.conditionWords,
+			location: i.location,
+			area: i.area,
+			site: i.site,
+			surveyId: i.surveyId,
+			measureId: i.measureId,
+			saving: cellText(i, 'cost', system),
+			repair: i.repairCostMinor === null ? null : cellText(i, 'repair', system),
+			payback: i.paybackYears === null ? null : paybackWords(i.paybackYears)
+		})),
+		surveyCount: _all.length
+	};
 }

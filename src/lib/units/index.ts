@@ -17,6 +17,7 @@ export {
 export {
 	DEFAULT_LOCALE,
 	formatSignificant,
+	numberFormat,
 	roundToSignificant,
 	type NumberFormatOptions
 } from './number-format';

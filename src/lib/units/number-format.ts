@@ -75,25 +75,33 @@ export function formatSignificant(value: number, options: NumberFormatOptions = 
 /** Building an Intl.NumberFormat costs far more than using one: keep them per option set. */
 const formatters = new Map<string, Intl.NumberFormat>();
 
-function formatterFor(options: NumberFormatOptions, sigFigs: number, plain: boolean) {
-	const locale = (options.locale as string | string[] | undefined) ?? DEFAULT_LOCALE;
-	const keepZeros = options.keepTrailingZeros === true;
-	const grouping = options.grouping !== false;
-	const key = JSON.stringify([locale, sigFigs, plain, keepZeros, grouping]);
+/** An Intl.NumberFormat for these options, made once (money, counts, figures on every row). */
+export function numberFormat(
+	locale: string | readonly string[],
+	options: Intl.NumberFormatOptions
+): Intl.NumberFormat {
+	const key = JSON.stringify([locale, options]);
 	let format = formatters.get(key);
 	if (!format) {
-		format = new Intl.NumberFormat(locale, {
-			notation: plain ? 'standard' : 'scientific',
-			maximumSignificantDigits: sigFigs,
-			minimumSignificantDigits: keepZeros ? sigFigs : 1,
-			// 'auto' follows the locale's own rule (Spanish does not group four-digit numbers).
-			useGrouping: grouping ? 'auto' : false,
-			// A value that rounds to zero reads "0", never "-0".
-			signDisplay: 'negative'
-		});
-		// Option sets in use are few; the bound only guards against a caller varying locales freely.
+		format = new Intl.NumberFormat(locale as string | string[], options);
+		// Option sets in use are few; the bound only guards against a caller varying them freely.
 		if (formatters.size >= 64) formatters.clear();
 		formatters.set(key, format);
 	}
 	return format;
+}
+
+function formatterFor(options: NumberFormatOptions, sigFigs: number, plain: boolean) {
+	const locale = (options.locale as string | string[] | undefined) ?? DEFAULT_LOCALE;
+	const keepZeros = options.keepTrailingZeros === true;
+	const grouping = options.grouping !== false;
+	return numberFormat(locale, {
+		notation: plain ? 'standard' : 'scientific',
+		maximumSignificantDigits: sigFigs,
+		minimumSignificantDigits: keepZeros ? sigFigs : 1,
+		// 'auto' follows the locale's own rule (Spanish does not group four-digit numbers).
+		useGrouping: grouping ? 'auto' : false,
+		// A value that rounds to zero reads "0", never "-0".
+		signDisplay: 'negative'
+	});
 }

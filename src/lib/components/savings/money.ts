@@ -3,9 +3,10 @@
  * (en-US grouping), compact on an axis ("$1.2M") and in full in the text tables.
  */
 import { fromMinorUnits } from '$lib/steam';
+import { numberFormat } from '$lib/units';
 
 export function moneyText(minor: number, currency: string): string {
-	return new Intl.NumberFormat('en-US', {
+	return numberFormat('en-US', {
 		style: 'currency',
 		currency,
 		maximumFractionDigits: 0
@@ -13,7 +14,7 @@ export function moneyText(minor: number, currency: string): string {
 }
 
 export function compactMoney(minor: number, currency: string): string {
-	return new Intl.NumberFormat('en-US', {
+	return numberFormat('en-US', {
 		style: 'currency',
 		currency,
 		notation: 'compact',

@@ -31,9 +31,9 @@ import {
 import { into, type SavingsBreakdown, type SavingsGroup, type SavingsTotals } from './totals';
 
 /** Items on one page of the Ladder's list. */
-export const LADDER_PAGE_ITEMS = 50;
+export const LADDER_PAGE_ITEMS = 25;
 /** Points of the Pareto curve at most (every k-th item on a long list, and the last). */
-export const LADDER_PARETO_POINTS = 200;
+export const LADDER_PARETO_POINTS = 60;
 
 /** A survey the list reads: its site's most recent publication, at its last revision. */
 export interface ShownSurvey {

@@ -3,7 +3,12 @@
  * system, three significant figures, money in the site's currency.
  */
 import type { Assumption } from '$lib/steam';
-import { formatQuantityParts, formatSignificant, type UnitSystemId } from '$lib/units';
+import {
+	formatQuantityParts,
+	formatSignificant,
+	numberFormat,
+	type UnitSystemId
+} from '$lib/units';
 import type { Figure, FigureKey } from './estimate';
 
 export const FIGURE_LABELS: Record<FigureKey, string> = {
@@ -22,7 +27,7 @@ export interface ShownFigure {
 
 /** Money to three significant figures in the site's currency: "€12,300". */
 export function formatMoney(amount: number, currency: string): string {
-	return new Intl.NumberFormat('en-US', {
+	return numberFormat('en-US', {
 		style: 'currency',
 		currency,
 		maximumSignificantDigits: 3
