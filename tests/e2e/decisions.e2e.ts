@@ -1,6 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { demoPassword, demoUsers } from '../../src/lib/server/seed/demo';
 import { maltingsClientUser } from '../../src/lib/server/seed/maltings';
+import { brackenford, unpublishBrackenford } from './support/brackenford';
 import { openTestDb, rows, type Db } from './support/db';
 import { signInHere } from './support/worker';
 
@@ -12,7 +13,6 @@ import { signInHere } from './support/worker';
  * both decisions and the question on the Desk's decisions page and answers; the client reads
  * the answer. The page is printable without its forms and carries the caution.
  */
-const brackenford = '5e7a0006-0000-4000-8000-000000000004';
 const consultant = demoUsers.find(
 	(u) => u.role === 'consultant' && u.email.includes('cinderbrook')
 )!;
@@ -24,23 +24,7 @@ test.beforeAll(() => {
 	db = openTestDb();
 });
 test.afterAll(async () => {
-	// Back to the seeded state (checked, in review, not published, nothing decided), written past
-	// the app, so the firm's change counter moves and kept views are read again.
-	for (const table of ['decision_digest_outbox', 'comments', 'decisions']) {
-		await rows(db, `DELETE FROM ${table} WHERE survey_id = ?`, [brackenford]);
-	}
-	await rows(db, 'DELETE FROM survey_revisions WHERE survey_id = ?', [brackenford]);
-	await rows(
-		db,
-		`UPDATE surveys SET status = 'in-review', published_at = NULL, cost_basis_id = NULL
-		 WHERE id = ?`,
-		[brackenford]
-	);
-	await rows(
-		db,
-		'UPDATE change_counters SET value = value + 1 WHERE firm_id = (SELECT firm_id FROM surveys WHERE id = ?)',
-		[brackenford]
-	);
+	await unpublishBrackenford(db);
 	await db?.end();
 });
 

@@ -1,6 +1,7 @@
 import { expect, test } from '@playwright/test';
 import { demoPassword, demoUsers } from '../../src/lib/server/seed/demo';
 import { maltingsClientUser } from '../../src/lib/server/seed/maltings';
+import { brackenford, unpublishBrackenford } from './support/brackenford';
 import { openTestDb, rows, type Db } from './support/db';
 import { linkIn, waitForMail } from './support/mailbox';
 import { signInHere } from './support/worker';
@@ -11,7 +12,6 @@ import { signInHere } from './support/worker';
  * text table; then publishes it, the client's e-mail arrives with a link that opens for the
  * client after signing in; then a correction is opened and published as revision 2.
  */
-const brackenford = '5e7a0006-0000-4000-8000-000000000004';
 const savings = `/desk/surveys/${brackenford}/savings`;
 const consultant = demoUsers.find(
 	(u) => u.role === 'consultant' && u.email.includes('cinderbrook')
@@ -23,20 +23,7 @@ test.beforeAll(() => {
 	db = openTestDb();
 });
 test.afterAll(async () => {
-	// Back to the seeded state (checked, in review, not published) for the files after this one;
-	// written past the app, so the firm's change counter moves and kept views are read again.
-	await rows(db, 'DELETE FROM survey_revisions WHERE survey_id = ?', [brackenford]);
-	await rows(
-		db,
-		`UPDATE surveys SET status = 'in-review', published_at = NULL, cost_basis_id = NULL
-		 WHERE id = ?`,
-		[brackenford]
-	);
-	await rows(
-		db,
-		'UPDATE change_counters SET value = value + 1 WHERE firm_id = (SELECT firm_id FROM surveys WHERE id = ?)',
-		[brackenford]
-	);
+	await unpublishBrackenford(db);
 	await db?.end();
 });
 

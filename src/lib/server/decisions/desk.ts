@@ -9,18 +9,16 @@ import { and, desc, eq, inArray } from 'drizzle-orm';
 import { DECISIONS, type Decision, type ItemKind, type ItemRef } from '../../schemas/decisions';
 import {
 	assets,
-	clientCompanies,
 	findings,
 	measures,
-	sites,
 	surveyRevisionFindings as S,
 	surveyRevisionMeasures,
-	surveyRevisions,
-	surveys
+	surveyRevisions
 } from '../db/schema';
 import { db as appDb } from '../db';
 import type { Executor } from '../db/types';
 import { conditionWords, kindWords } from '../finding-words';
+import { surveyNames } from '../publish/revisions';
 import { surveyActivity, type CommentEntry, type DecisionEntry } from './read';
 import { addComment, type DecisionActor } from './write';
 
@@ -117,19 +115,8 @@ export async function itemWords(db: Executor, surveyId: string, ids: string[]) {
 }
 
 export async function deskDecisionsPage(surveyId: string, db: Executor = appDb) {
-	const [[survey], activity] = await Promise.all([
-		db
-			.select({
-				id: surveys.id,
-				name: surveys.name,
-				stage: surveys.status,
-				site: sites.name,
-				client: clientCompanies.name
-			})
-			.from(surveys)
-			.innerJoin(sites, eq(sites.id, surveys.siteId))
-			.innerJoin(clientCompanies, eq(clientCompanies.id, sites.clientCompanyId))
-			.where(eq(surveys.id, surveyId)),
+	const [survey, activity] = await Promise.all([
+		surveyNames(db, surveyId),
 		surveyActivity(db, surveyId)
 	]);
 	if (!survey) return null;

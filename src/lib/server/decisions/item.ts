@@ -12,18 +12,17 @@ import type { UnitSystemId } from '../../units';
 import {
 	areas,
 	assets,
-	clientCompanies,
 	findings as F,
 	headers,
 	measures,
-	sites,
 	surveyRevisionFindings as S,
 	surveyRevisionMeasures,
-	surveyRevisions,
-	surveys
+	surveyRevisions
 } from '../db/schema';
 import type { Executor } from '../db/types';
 import { photosOf } from '../desk/finding-detail';
+import { liveItemColumns, snapshotItemColumns } from '../item-columns';
+import { surveyNames } from '../publish/revisions';
 import { surveyPricing } from '../desk/findings-query';
 import { conditionWords, kindWords } from '../finding-words';
 import { revisionMeasures, surveyMeasures, type MeasureRow } from '../measures/sums';
@@ -68,7 +67,7 @@ export interface ItemPage {
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
 interface RawRow {
-	findingId: string;
+	id: string;
 	kind: string;
 	condition: string | null;
 	tag: string | null;
@@ -89,7 +88,7 @@ interface RawRow {
 
 function shown(r: RawRow, currency: string): ShownFinding {
 	return {
-		findingId: r.findingId,
+		findingId: r.id,
 		kindWords: kindWords(r.kind),
 		conditionWords: conditionWords(r.condition),
 		tag: r.tag,
@@ -113,25 +112,7 @@ function shown(r: RawRow, currency: string): ShownFinding {
 /** Findings of the revision's snapshot matching `where`, biggest saving first. */
 function snapshotRows(db: Executor, revisionId: string, where: SQL) {
 	return db
-		.select({
-			findingId: S.findingId,
-			kind: S.kind,
-			condition: S.condition,
-			tag: S.tag,
-			location: S.location,
-			area: S.areaName,
-			header: S.headerName,
-			measureId: S.measureId,
-			figuresCurrent: S.figuresCurrent,
-			steamKgH: S.steamLoss,
-			heatKw: S.heatLoss,
-			fuelGjYear: S.fuelEnergy,
-			costMinor: S.cost,
-			co2KgYear: S.co2,
-			waterM3Year: S.water,
-			repairCostMinor: S.repairCost,
-			paybackYears: S.paybackYears
-		})
+		.select({ ...snapshotItemColumns, figuresCurrent: S.figuresCurrent })
 		.from(S)
 		.where(and(eq(S.revisionId, revisionId), where))
 		.orderBy(desc(S.cost), asc(S.findingId));
@@ -139,33 +120,17 @@ function snapshotRows(db: Executor, revisionId: string, where: SQL) {
 
 /** Live findings matching `where` (a survey published before revisions were kept). */
 function liveRows(db: Executor, where: SQL) {
-	return db
-		.select({
-			findingId: F.id,
-			kind: F.kind,
-			condition: F.condition,
-			tag: assets.tag,
-			location: F.location,
-			area: areas.name,
-			header: headers.name,
-			measureId: F.measureId,
+	return (
+		db
 			// Locked since it was published, so what it shows is what was published.
-			figuresCurrent: F.pricedBasisId,
-			steamKgH: F.steamLoss,
-			heatKw: F.heatLoss,
-			fuelGjYear: F.fuelEnergy,
-			costMinor: F.cost,
-			co2KgYear: F.co2,
-			waterM3Year: F.water,
-			repairCostMinor: F.repairCost,
-			paybackYears: F.paybackYears
-		})
-		.from(F)
-		.leftJoin(assets, eq(assets.id, F.assetId))
-		.leftJoin(areas, eq(areas.id, F.areaId))
-		.leftJoin(headers, eq(headers.id, F.headerId))
-		.where(and(isNull(F.deletedAt), where))
-		.orderBy(desc(F.cost), asc(F.id));
+			.select({ ...liveItemColumns, figuresCurrent: F.pricedBasisId })
+			.from(F)
+			.leftJoin(assets, eq(assets.id, F.assetId))
+			.leftJoin(areas, eq(areas.id, F.areaId))
+			.leftJoin(headers, eq(headers.id, F.headerId))
+			.where(and(isNull(F.deletedAt), where))
+			.orderBy(desc(F.cost), asc(F.id))
+	);
 }
 
 async function rowsOf(db: Executor, facts: ItemFacts, revision: boolean, where: 'one' | 'measure') {
@@ -233,24 +198,15 @@ export async function ladderItemPage(
 ): Promise<ItemPage | null> {
 	const ref = facts.ref;
 	const fromRevision = facts.source === 'revision';
-	const [[survey], unitSystem, currency, history, thread] = await Promise.all([
-		db
-			.select({
-				id: surveys.id,
-				name: surveys.name,
-				site: sites.name,
-				client: clientCompanies.name
-			})
-			.from(surveys)
-			.innerJoin(sites, eq(sites.id, surveys.siteId))
-			.innerJoin(clientCompanies, eq(clientCompanies.id, sites.clientCompanyId))
-			.where(eq(surveys.id, facts.surveyId)),
+	const [named, unitSystem, currency, history, thread] = await Promise.all([
+		surveyNames(db, facts.surveyId),
 		unitSystemOf(db, reader.id),
 		currencyOf(db, facts),
 		decisionHistory(db, ref),
 		commentThread(db, ref)
 	]);
-	if (!survey) return null;
+	if (!named) return null;
+	const { stage: _stage, ...survey } = named;
 	const base = {
 		kind: ref.kind,
 		survey,

@@ -76,6 +76,23 @@ async function run(db: Db, work: (tx: Tx) => Promise<string>): Promise<WriteOutc
 	}
 }
 
+/** The digest's outbox row of a new decision or comment (./digest.ts), in its transaction. */
+function queueForDigest(
+	tx: Tx,
+	f: ItemFacts,
+	actor: DecisionActor,
+	event: { decisionId: string } | { commentId: string },
+	now: Date
+) {
+	return tx.insert(decisionDigestOutbox).values({
+		firmId: f.firmId,
+		surveyId: f.surveyId,
+		...event,
+		actorId: actor.id,
+		createdAt: now
+	});
+}
+
 const itemColumns = (ref: ItemRef) =>
 	ref.kind === 'finding' ? { findingId: ref.id } : { measureId: ref.id };
 
@@ -138,13 +155,7 @@ export async function recordDecision(
 				createdAt: now
 			});
 		}
-		await tx.insert(decisionDigestOutbox).values({
-			firmId: f.firmId,
-			surveyId: f.surveyId,
-			decisionId: id,
-			actorId: actor.id,
-			createdAt: now
-		});
+		await queueForDigest(tx, f, actor, { decisionId: id }, now);
 		await recordChange(tx, {
 			firmId: f.firmId,
 			actorId: actor.id,
@@ -195,13 +206,7 @@ export async function addComment(
 			body,
 			createdAt: now
 		});
-		await tx.insert(decisionDigestOutbox).values({
-			firmId: f.firmId,
-			surveyId: f.surveyId,
-			commentId: id,
-			actorId: actor.id,
-			createdAt: now
-		});
+		await queueForDigest(tx, f, actor, { commentId: id }, now);
 		await recordChange(tx, {
 			firmId: f.firmId,
 			actorId: actor.id,
