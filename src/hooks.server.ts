@@ -1,8 +1,9 @@
-import type { Handle, HandleServerError } from '@sveltejs/kit';
+import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
-import { dev } from '$app/environment';
+import { building, dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { readSession } from '$lib/server/auth/sessions';
+import { startDigestTimer } from '$lib/server/decisions/digest-timer';
 import { pool } from '$lib/server/db';
 import { MAX_FORM_BYTES, readForm } from '$lib/server/forms';
 import { guardRoute } from '$lib/server/policy';
@@ -15,6 +16,14 @@ if (!dev) {
 		pool.end().catch(() => {});
 	});
 }
+
+/**
+ * Once per server process: the e-mail digest of clients' decisions and comments on a timer
+ * (docs/decisions.md, "The digest"; STEAMWISP_DIGEST_MINUTES). Not while building.
+ */
+export const init: ServerInit = () => {
+	if (!building) startDigestTimer();
+};
 
 /**
  * Pages' form posts are small; the API's own routes set their own limits (the app's

@@ -12,6 +12,7 @@
  * repeat (they run once per role and tenant).
  */
 import { costsMatrix } from './authorization-matrix.costs';
+import { decisionsMatrix } from './authorization-matrix.decisions';
 import { deskAreaMatrix } from './authorization-matrix.desk-areas';
 import { deskReviewMatrix } from './authorization-matrix.desk-review';
 import { deskSurveysMatrix } from './authorization-matrix.desk-surveys';
@@ -184,6 +185,7 @@ export const matrix: Record<string, Record<string, Case>> = {
 	...publishMatrix,
 	...reportsMatrix,
 	...costsMatrix,
+	...decisionsMatrix,
 
 	'/(ladder)/ladder': {
 		GET: { expect: { anonymous: 'signin', admin: 200, consultant: 200, auditor: 403, client: 200 } }

@@ -1,9 +1,9 @@
 import { expect, test } from '@playwright/test';
 import { demoPassword, demoUsers } from '../../src/lib/server/seed/demo';
 import { maltingsClientUser } from '../../src/lib/server/seed/maltings';
+import { brackenford, unpublishBrackenford } from './support/brackenford';
 import { openTestDb, rows, type Db } from './support/db';
 import { linkIn, waitForMail } from './support/mailbox';
-import { brackenford, unpublishBrackenford } from './support/brackenford';
 import { signInHere } from './support/worker';
 
 /**
@@ -23,8 +23,6 @@ test.beforeAll(() => {
 	db = openTestDb();
 });
 test.afterAll(async () => {
-	// Back to the seeded state (checked, in review, not published) for the files after this one;
-	// written past the app, so the firm's change counter moves and kept views are read again.
 	await unpublishBrackenford(db);
 	await db?.end();
 });

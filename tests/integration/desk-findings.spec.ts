@@ -45,7 +45,7 @@ const areaRows = [
 const [survey, otherSurvey] = [id(6, 1), id(6, 2)];
 const N = 36;
 const KINDS = ['trap', 'leak', 'insulation', 'header'] as const;
-const STATUS_CYCLE = ['draft', 'draft', 'draft', 'reviewed', 'published', 'declined'] as const;
+const STATUS_CYCLE = ['draft', 'draft', 'draft', 'reviewed', 'published', 'reviewed'] as const;
 const t0 = Date.parse('2026-11-18T07:00:00Z');
 
 const basis: CostBasis = {
@@ -316,7 +316,7 @@ describe('filters and search', () => {
 			(p) => ['failed-open', 'small'].includes(p.condition ?? '')
 		],
 		['stage=draft', (p) => p.status === 'draft'],
-		['stage=published&stage=declined', (p) => ['published', 'declined'].includes(p.status)],
+		['stage=published&stage=draft', (p) => ['published', 'draft'].includes(p.status)],
 		['stage=unreviewed', (p) => !p.reviewed],
 		['stage=desk-checked', (p) => p.reviewed],
 		['q=gallery%2003', (p) => p.location === 'Gallery 03'],

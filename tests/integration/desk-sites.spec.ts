@@ -6,7 +6,6 @@
  * creamery (its published spring survey is frozen on basis 1 by the seed) plus this file's own
  * invented second site (fixed ids, removed afterwards).
  */
-import { isActionFailure } from '@sveltejs/kit';
 import { and, count, desc, eq, inArray, isNull, like, ne } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CostBasis } from '../../src/lib/schemas/site';
@@ -24,7 +23,7 @@ import { actions as basisActions } from '../../src/routes/(desk)/desk/sites/[sit
 import { actions as headerActions } from '../../src/routes/(desk)/desk/sites/[siteId]/headers/+page.server';
 import { testDatabase } from './db';
 import { consultantA, consultantB } from './demo-people';
-import { routeEvent } from './walk-api';
+import { postForm } from './walk-api';
 
 const { pool, db } = testDatabase();
 const firmId = demoFirms[0].id;
@@ -48,26 +47,15 @@ const otherBasis: CostBasis = {
 	operatingHours: 8000
 };
 
-/** Posts a form to a page action as SvelteKit would after its hooks. */
-async function post(
+/** Posts a form to a page action (the consultant, unless someone else is given). */
+const post = (
 	action: (event: never) => unknown,
 	routeId: string,
 	path: string,
 	params: Record<string, string>,
 	form: Record<string, string>,
 	user: SessionUser = consultantA
-) {
-	const request = new Request(`http://127.0.0.1${path}`, {
-		method: 'POST',
-		headers: { 'content-type': 'application/x-www-form-urlencoded' },
-		body: new URLSearchParams(form)
-	});
-	const result = await action(routeEvent(user, routeId, request, params) as never);
-	if (isActionFailure(result)) {
-		return { status: result.status, data: result.data as unknown as Record<string, never> };
-	}
-	return { status: 200, data: result as unknown as Record<string, never> };
-}
+) => postForm(action, routeId, path, params, form, user);
 
 const auditCount = async () => Number((await db.select({ n: count() }).from(schema.auditLog))[0].n);
 const lastAudit = async () =>

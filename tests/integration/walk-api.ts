@@ -1,5 +1,8 @@
-/** Calling the Walk's API route handlers directly, as SvelteKit would after its hooks. */
-import { isHttpError } from '@sveltejs/kit';
+/**
+ * Calling route handlers and form actions directly, as SvelteKit would after its hooks (the
+ * Walk's API routes, and `postForm` for any page's action).
+ */
+import { isActionFailure, isHttpError } from '@sveltejs/kit';
 import { GET as me } from '../../src/routes/api/me/+server';
 import { GET as surveys } from '../../src/routes/api/surveys/+server';
 import { GET as snapshot } from '../../src/routes/api/surveys/[id]/snapshot/+server';
@@ -46,3 +49,27 @@ export const getSurveys = (user: SessionUser | null) =>
 	call(surveys, '/api/surveys', user, '/api/surveys');
 export const getSnapshot = (user: SessionUser | null, id: string) =>
 	call(snapshot, '/api/surveys/[id]/snapshot', user, `/api/surveys/${id}/snapshot`, { id });
+
+/**
+ * Posts a form to a page action as SvelteKit would after its hooks: a refusal comes back as
+ * its status and data; an error thrown (404, 403) propagates, as it would to SvelteKit.
+ */
+export async function postForm(
+	action: (event: never) => unknown,
+	routeId: string,
+	path: string,
+	params: Record<string, string>,
+	form: Record<string, string>,
+	user: SessionUser
+) {
+	const request = new Request(`http://127.0.0.1${path}`, {
+		method: 'POST',
+		headers: { 'content-type': 'application/x-www-form-urlencoded' },
+		body: new URLSearchParams(form)
+	});
+	const result = await action(routeEvent(user, routeId, request, params) as never);
+	if (isActionFailure(result)) {
+		return { status: result.status, data: result.data as unknown as Record<string, never> };
+	}
+	return { status: 200, data: result as unknown as Record<string, never> };
+}

@@ -1,6 +1,6 @@
 import type { Transaction } from 'dexie';
 import { findingCaptureSchema, type FindingCapture } from '$lib/schemas/capture';
-import { FINDING_STATUSES, type FindingStatus } from '$lib/schemas/finding-vocabulary';
+import { lifecycleStatus, type FindingStatus } from '$lib/schemas/finding-vocabulary';
 import type { DeviceFinding, DevicePhoto, OutboxEntry, SetAsideRow } from './db';
 
 /**
@@ -50,7 +50,6 @@ const STORED_KEYS = [
 	'version',
 	'deleted'
 ] as const;
-const STATUSES = new Set<string>(FINDING_STATUSES);
 
 /**
  * A version-1 record as a capture: either already one, or a whole stored finding of that
@@ -72,8 +71,7 @@ export function captureFromV1(record: unknown): Carried {
 	return {
 		ok: true,
 		capture: parsed.data,
-		status:
-			typeof status === 'string' && STATUSES.has(status) ? (status as FindingStatus) : 'draft',
+		status: (typeof status === 'string' && lifecycleStatus(status)) || 'draft',
 		deleted
 	};
 }

@@ -42,18 +42,31 @@ export type {
 	TrapType
 };
 
-/** Lifecycle: draft (field) → reviewed (desk) → published → approved/scheduled/repaired/declined → verified. */
-export const FINDING_STATUSES = [
-	'draft',
-	'reviewed',
-	'published',
+/**
+ * Lifecycle: draft (field) → reviewed (desk) → published (sent to the client). A client's
+ * decision on a published finding (approved, scheduled, repaired, declined) and what a later
+ * survey confirmed are not statuses: they live in the decisions table (docs/decisions.md).
+ */
+export const FINDING_STATUSES = ['draft', 'reviewed', 'published'] as const;
+export type FindingStatus = (typeof FINDING_STATUSES)[number];
+
+/**
+ * Words a finding's status held before decisions had their own table (migration 0012 moved
+ * them there). A device or a reply of that time may still carry one: it reads as published.
+ */
+export const FORMER_DECISION_STATUSES = [
 	'approved',
 	'scheduled',
 	'repaired',
 	'declined',
 	'verified'
 ] as const;
-export type FindingStatus = (typeof FINDING_STATUSES)[number];
+
+/** A stored or received status as a lifecycle status: a former decision word is published. */
+export function lifecycleStatus(status: string): FindingStatus | null {
+	if ((FINDING_STATUSES as readonly string[]).includes(status)) return status as FindingStatus;
+	return (FORMER_DECISION_STATUSES as readonly string[]).includes(status) ? 'published' : null;
+}
 
 // Words people read for each stored id: raw ids never reach a screen.
 
@@ -67,12 +80,7 @@ export const FINDING_KIND_LABELS: Record<FindingKind, string> = {
 export const FINDING_STATUS_LABELS: Record<FindingStatus, string> = {
 	draft: 'Recorded in the field',
 	reviewed: 'Checked at the desk',
-	published: 'Sent to the client',
-	approved: 'Approved for repair',
-	scheduled: 'Repair booked',
-	repaired: 'Repaired',
-	declined: 'Not going ahead',
-	verified: 'Confirmed by a later survey'
+	published: 'Sent to the client'
 };
 
 export const TRAP_TYPE_LABELS: Record<TrapType, string> = {

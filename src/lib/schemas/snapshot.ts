@@ -6,12 +6,8 @@
 import { z } from 'zod';
 import { dnSchema, uuidSchema } from './common';
 import { findingCaptureSchema, isoDateTime } from './capture';
-import {
-	FINDING_STATUSES,
-	TRAP_CONDITIONS,
-	TRAP_DISCHARGES,
-	TRAP_TYPES
-} from './finding-vocabulary';
+import { receivedStatusSchema } from './finding-status';
+import { TRAP_CONDITIONS, TRAP_DISCHARGES, TRAP_TYPES } from './finding-vocabulary';
 import { unitSystems } from './roles';
 import { costBasisSchema, headerSchema } from './site';
 import { INPUT_LIMITS, limitedNumber } from './ranges';
@@ -84,7 +80,7 @@ export const findingSnapshotSchema = z.object({
 	capture: findingCaptureSchema,
 	/** Server version: the base version of the device's next edit. */
 	version: z.number().int().positive(),
-	status: z.enum(FINDING_STATUSES, { error: 'Choose where this finding stands' })
+	status: receivedStatusSchema
 });
 export type FindingSnapshot = z.infer<typeof findingSnapshotSchema>;
 

@@ -6,7 +6,7 @@
 import { z } from 'zod';
 import { uuidSchema } from './common';
 import { findingCaptureSchema } from './capture';
-import { FINDING_STATUSES } from './finding-vocabulary';
+import { receivedStatusSchema } from './finding-status';
 import { surveySummarySchema } from './snapshot';
 
 /** Mutations one push may carry; a device with more sends several batches, in order. */
@@ -107,7 +107,7 @@ export const findingChangeSchema = z.object({
 	data: z
 		.object({
 			capture: findingCaptureSchema,
-			status: z.enum(FINDING_STATUSES),
+			status: receivedStatusSchema,
 			results: serverResultsSchema.nullable()
 		})
 		.nullable()

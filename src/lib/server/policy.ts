@@ -15,7 +15,15 @@ import type { Role } from '$lib/schemas/roles';
 import { db } from './db';
 import { sites, surveyAuditors, surveys, users } from './db/schema';
 import { personColumns } from './auth/person-columns';
-import { type Access, personAccess, siteAccess, surveyAccess } from './policy/decide';
+import type { ItemRef } from '$lib/schemas/decisions';
+import { itemFacts } from './decisions/facts';
+import {
+	type Access,
+	ladderItemAccess,
+	personAccess,
+	siteAccess,
+	surveyAccess
+} from './policy/decide';
 import { gate, roleCan, type Capability } from './policy/table';
 
 export * from './policy/table';
@@ -118,6 +126,44 @@ export async function requireSurveyAccess(
 	});
 	demand(access, need);
 	return { id: row.id, firmId: row.firmId, siteId: row.siteId, access };
+}
+
+/**
+ * One finding or measure on the Ladder (policy/decide.ts ladderItemAccess): 404 when hidden; a
+ * client of the survey's company asking for one their revision does not hold is told so (404
+ * with words); `write` (decide and comment) is the client's, staff read (403 with words).
+ */
+export async function requireLadderItem(
+	user: SessionUser,
+	ref: ItemRef,
+	need: 'read' | 'write' = 'read'
+) {
+	if (!uuidSchema.safeParse(ref.id).success) hide();
+	const facts = await itemFacts(db, user.firmId, ref);
+	if (!facts) hide();
+	const survey = {
+		firmId: facts.firmId,
+		clientCompanyId: facts.clientCompanyId,
+		published: facts.published,
+		actorAssigned: false
+	};
+	const access = ladderItemAccess(user, { ...survey, shown: facts.shown });
+	if (access === 'none') {
+		if (user.role === 'client' && surveyAccess(user, survey) === 'read') {
+			error(404, notShownMessage(ref));
+		}
+		hide();
+	}
+	if (need === 'write' && access !== 'write') {
+		error(403, 'Decisions and comments here are the client’s: answer them at the Desk.');
+	}
+	return { ...facts, access };
+}
+
+/** Why a client's own published survey shows no such finding or measure. */
+export function notShownMessage(ref: ItemRef): string {
+	const what = ref.kind === 'finding' ? 'finding' : 'measure';
+	return `This ${what} is not in the report published to you (a correction your consultant has not published yet may add it), so it cannot be opened or decided on yet.`;
 }
 
 /** One site the person may see (read) or change (write); 404 when hidden, 403 read-only. */

@@ -1,14 +1,19 @@
 /**
- * The seeded Brackenford survey (checked, in review, never published) that several browser
- * tests publish: put back for the files after them. Written past the app, so the firm's change
- * counter moves and kept views are read again.
+ * The Brackenford survey, seeded checked and ready to publish: the files that publish it put
+ * it back afterwards for the files after them.
  */
 import { rows, type Db } from './db';
 
 export const brackenford = '5e7a0006-0000-4000-8000-000000000004';
 
+/**
+ * Back to the seeded state (checked, in review, not published, nothing decided), written past
+ * the app, so the firm's change counter moves and kept views are read again.
+ */
 export async function unpublishBrackenford(db: Db): Promise<void> {
-	await rows(db, 'DELETE FROM survey_revisions WHERE survey_id = ?', [brackenford]);
+	for (const table of ['decision_digest_outbox', 'comments', 'decisions', 'survey_revisions']) {
+		await rows(db, `DELETE FROM ${table} WHERE survey_id = ?`, [brackenford]);
+	}
 	await rows(
 		db,
 		`UPDATE surveys SET status = 'in-review', published_at = NULL, cost_basis_id = NULL

@@ -40,6 +40,13 @@ export interface Tenant {
 	findingSurveyId: string;
 	/** A measure grouping that finding (the brewhouse survey is published: it is frozen). */
 	measureId: string;
+	/**
+	 * A published survey of the demo client's site with revision 1 frozen: a finding and a
+	 * measure the demo client's users may open and decide on (docs/decisions.md).
+	 */
+	decisionSurveyId: string;
+	decisionFindingId: string;
+	decisionMeasureId: string;
 	invitationId: string;
 	messageId: string;
 	/** Text that may appear only in answers to this firm's people. */
@@ -76,13 +83,20 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		finding: hex(index, 7),
 		conflict: hex(index, 8),
 		conflictMutation: hex(index, 9),
-		measure: hex(index, 10)
+		measure: hex(index, 10),
+		decisionSurvey: hex(index, 11),
+		decisionFinding: hex(index, 12),
+		decisionMeasure: hex(index, 13),
+		decisionRevision: hex(index, 14)
 	};
 	const names = {
 		otherClient: `${tag} Matrix Brewery`,
 		otherSite: `${tag} Matrix Brewhouse`,
 		otherSurvey: `${tag} brewhouse survey (published)`,
 		clientSurvey: `${tag} creamery follow-up (published)`,
+		decisionSurvey: `${tag} creamery decisions (published)`,
+		decisionFinding: `${tag} matrix ladder valve`,
+		decisionMeasure: `${tag} matrix ladder job`,
 		target: `${tag} Matrix Target`,
 		targetEmail: `matrix.target@${tag.toLowerCase()}.example`,
 		invitationEmail: `matrix.invitee@${tag.toLowerCase()}.example`
@@ -149,6 +163,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		[ids.measure, ids.otherSurvey, `${tag} matrix measure`]
 	);
 	await db.query('UPDATE findings SET measure_id = ? WHERE id = ?', [ids.measure, ids.finding]);
+	await publishedForDecisions(db, firm.id, site.id, ids, names);
 	const auditor = demoUsers.find((u) => u.firmId === firm.id && u.role === 'auditor')!;
 	await db.query(
 		`INSERT INTO finding_conflicts (id, firm_id, survey_id, finding_id, user_id, device_id,
@@ -182,6 +197,7 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 
 	const users = demoUsers.filter((u) => u.firmId === firm.id);
 	const hiddenFromAuditor = [
+		names.decisionSurvey,
 		names.otherClient,
 		names.otherSite,
 		names.otherSurvey,
@@ -202,6 +218,9 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		conflictId: ids.conflict,
 		findingSurveyId: ids.otherSurvey,
 		measureId: ids.measure,
+		decisionSurveyId: ids.decisionSurvey,
+		decisionFindingId: ids.decisionFinding,
+		decisionMeasureId: ids.decisionMeasure,
 		invitationId: ids.invitation,
 		messageId: message.id,
 		markers: [
@@ -232,4 +251,74 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 		],
 		hiddenFromAuditor
 	};
+}
+
+/**
+ * A survey of the demo site published as revision 1, as publishing leaves it: the survey row,
+ * one leak in one measure, and their frozen snapshot (figures invented test data).
+ */
+async function publishedForDecisions(
+	db: Db,
+	firmId: string,
+	siteId: string,
+	ids: Record<
+		'decisionSurvey' | 'decisionFinding' | 'decisionMeasure' | 'decisionRevision',
+		string
+	>,
+	names: Record<'decisionSurvey' | 'decisionFinding' | 'decisionMeasure', string>
+) {
+	await db.query(
+		`INSERT INTO surveys (id, firm_id, site_id, name, status, published_at)
+		 VALUES (?, ?, ?, ?, 'published', NOW(3))
+		 ON DUPLICATE KEY UPDATE name = VALUES(name), status = 'published', published_at = NOW(3)`,
+		[ids.decisionSurvey, firmId, siteId, names.decisionSurvey]
+	);
+	await db.query(
+		`INSERT INTO measures (id, survey_id, name) VALUES (?, ?, ?)
+		 ON DUPLICATE KEY UPDATE deleted_at = NULL`,
+		[ids.decisionMeasure, ids.decisionSurvey, names.decisionMeasure]
+	);
+	await db.query(
+		`INSERT INTO findings (id, survey_id, kind, location, notes, inputs, photo_ids, status,
+		   measure_id, cost_minor, repair_cost_minor, payback_years)
+		 VALUES (?, ?, 'leak', ?, '', '{}', '[]', 'reviewed', ?, 120000, 30000, 0.25)
+		 ON DUPLICATE KEY UPDATE deleted_at = NULL`,
+		[ids.decisionFinding, ids.decisionSurvey, names.decisionFinding, ids.decisionMeasure]
+	);
+	const totals = {
+		count: 1,
+		steamKgH: 2,
+		heatKw: 1.4,
+		fuelGjYear: 40,
+		costMinor: 120000,
+		co2KgYear: 2200,
+		waterM3Year: 14,
+		repairCostMinor: 30000,
+		withoutRepairCost: 0,
+		extraCostMinor: 0,
+		investmentMinor: 30000,
+		paybackYears: 0.25,
+		currency: 'EUR',
+		outOfDate: 0,
+		withoutFigures: 0
+	};
+	await db.query(
+		`INSERT INTO survey_revisions (id, survey_id, number, published_at, totals, finding_count)
+		 VALUES (?, ?, 1, NOW(3), ?, 1)
+		 ON DUPLICATE KEY UPDATE totals = VALUES(totals)`,
+		[ids.decisionRevision, ids.decisionSurvey, JSON.stringify(totals)]
+	);
+	await db.query(
+		`INSERT IGNORE INTO survey_revision_findings (revision_id, finding_id, kind, status, location,
+		   measure_id, figures_current, steam_kg_h, heat_kw, fuel_gj, cost_minor, co2_kg, water_m3,
+		   repair_cost_minor, payback_years, finding_version)
+		 VALUES (?, ?, 'leak', 'reviewed', ?, ?, 1, 2, 1.4, 40, 120000, 2200, 14, 30000, 0.25, 1)`,
+		[ids.decisionRevision, ids.decisionFinding, names.decisionFinding, ids.decisionMeasure]
+	);
+	await db.query(
+		`INSERT IGNORE INTO survey_revision_measures (revision_id, measure_id, name, access_cost_minor,
+		   scaffold_cost_minor, shutdown_cost_minor, other_cost_minor, sort_order, created_at)
+		 VALUES (?, ?, ?, 0, 0, 0, 0, 0, NOW(3))`,
+		[ids.decisionRevision, ids.decisionMeasure, names.decisionMeasure]
+	);
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Role } from '../../schemas/roles';
-import { personAccess, siteAccess, surveyAccess, type Actor } from './decide';
+import { ladderItemAccess, personAccess, siteAccess, surveyAccess, type Actor } from './decide';
 
 const firmA = 'firm-a';
 const firmB = 'firm-b';
@@ -53,6 +53,34 @@ describe('surveys', () => {
 		for (const role of ['admin', 'consultant', 'auditor', 'client'] as const) {
 			const other = survey({ firmId: firmB, published: true, actorAssigned: true });
 			expect(surveyAccess(actor(role), other), role).toBe('none');
+		}
+	});
+});
+
+describe('a finding or measure on the Ladder', () => {
+	const item = (o: Partial<Parameters<typeof ladderItemAccess>[1]> = {}) => ({
+		...survey({ published: true }),
+		shown: true,
+		...o
+	});
+
+	it("lets the company's client users decide and comment on what they are shown", () => {
+		expect(ladderItemAccess(actor('client'), item())).toBe('write');
+	});
+
+	it('hides what is not published, not in the revision shown, or another company’s', () => {
+		expect(ladderItemAccess(actor('client'), item({ published: false }))).toBe('none');
+		expect(ladderItemAccess(actor('client'), item({ shown: false }))).toBe('none');
+		expect(ladderItemAccess(actor('client'), item({ clientCompanyId: brewery }))).toBe('none');
+	});
+
+	it('lets the firm’s staff look (they answer at the Desk), auditors and other firms nothing', () => {
+		expect(ladderItemAccess(actor('admin'), item())).toBe('read');
+		expect(ladderItemAccess(actor('consultant'), item())).toBe('read');
+		expect(ladderItemAccess(actor('consultant'), item({ shown: false }))).toBe('none');
+		expect(ladderItemAccess(actor('auditor'), item({ actorAssigned: true }))).toBe('none');
+		for (const role of ['admin', 'consultant', 'client'] as const) {
+			expect(ladderItemAccess(actor(role), item({ firmId: firmB })), role).toBe('none');
 		}
 	});
 });

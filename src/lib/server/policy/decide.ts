@@ -41,6 +41,30 @@ export function surveyAccess(actor: Actor, survey: SurveyFacts): Access {
 	}
 }
 
+export interface ItemFacts extends SurveyFacts {
+	/** Whether the finding or measure is in what the client is shown (the last published revision). */
+	shown: boolean;
+}
+
+/**
+ * A finding or measure on the Ladder (docs/decisions.md): a client user of the company whose
+ * published survey holds it, in the revision they are shown, may read it and decide on it and
+ * comment ("write": their decisions and comments, never its figures); the firm's admins and
+ * consultants preview it ("read"; they answer at the Desk); nobody else sees it.
+ */
+export function ladderItemAccess(actor: Actor, item: ItemFacts): Access {
+	if (!item.shown || surveyAccess(actor, item) === 'none') return 'none';
+	switch (actor.role) {
+		case 'client':
+			return 'write';
+		case 'admin':
+		case 'consultant':
+			return 'read';
+		case 'auditor':
+			return 'none';
+	}
+}
+
 export interface SiteFacts {
 	firmId: string;
 	clientCompanyId: string;

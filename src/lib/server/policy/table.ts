@@ -31,7 +31,10 @@ export const capabilities = {
 	'survey.record': ['admin', 'consultant', 'auditor'],
 	/** Create, assign, review, price and publish surveys; edit sites and their cost basis. */
 	'survey.manage': staff,
-	/** Decide on published findings: approve, schedule, mark repaired, decline. */
+	/**
+	 * Decide on published findings and measures (approve, schedule, mark repaired, decline) and
+	 * comment on them in Ladder: a client's only writes (docs/decisions.md).
+	 */
 	'survey.decide': ['client']
 } as const satisfies Record<string, readonly Role[]>;
 

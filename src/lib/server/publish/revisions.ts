@@ -153,16 +153,13 @@ export interface LadderSurvey {
 	findings: PublishedFinding[];
 }
 
-/** The survey as the Ladder shows it: its last published revision's frozen figures. */
-export async function ladderSurvey(
-	surveyId: string,
-	limit = 50,
-	db: Executor = appDb
-): Promise<LadderSurvey | null> {
+/** A survey's name with its site's and client company's, for a page's heading; null if none. */
+export async function surveyNames(db: Executor, surveyId: string) {
 	const [survey] = await db
 		.select({
 			id: surveys.id,
 			name: surveys.name,
+			stage: surveys.status,
 			site: sites.name,
 			client: clientCompanies.name
 		})
@@ -170,7 +167,18 @@ export async function ladderSurvey(
 		.innerJoin(sites, eq(sites.id, surveys.siteId))
 		.innerJoin(clientCompanies, eq(clientCompanies.id, sites.clientCompanyId))
 		.where(eq(surveys.id, surveyId));
-	if (!survey) return null;
+	return survey ?? null;
+}
+
+/** The survey as the Ladder shows it: its last published revision's frozen figures. */
+export async function ladderSurvey(
+	surveyId: string,
+	limit = 50,
+	db: Executor = appDb
+): Promise<LadderSurvey | null> {
+	const named = await surveyNames(db, surveyId);
+	if (!named) return null;
+	const { stage: _stage, ...survey } = named;
 	const [latest] = await revisionsOf(db, surveyId);
 	if (!latest) return { survey, revision: null, findings: [] };
 	const [rev] = await db

@@ -12,14 +12,10 @@ import { and, asc, desc, eq, gt, lt, sql, type AnyColumn } from 'drizzle-orm';
 import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
 import type { Executor } from '../db/types';
 import type { SavingsItem } from '../savings/ranked-list';
-import {
-	savingFindingSql,
-	savingsItem,
-	snapshotItemColumns,
-	type ItemColumns
-} from '../savings/ranked-list';
+import { savingFindingSql, savingsItem, type ItemColumns } from '../savings/ranked-list';
 import type { ReportContent } from './content';
 import { savingSnapshotSql } from '../publish/snapshot';
+import { liveItemColumns, snapshotItemColumns } from '../item-columns';
 
 /** One ranked row of a report: the savings list's item, and the version it was published at. */
 export interface ReportRow extends SavingsItem {
@@ -58,26 +54,7 @@ function livePage(
 	measureId: string | null
 ) {
 	return db
-		.select({
-			id: F.id,
-			kind: F.kind,
-			tag: assets.tag,
-			location: F.location,
-			area: areas.name,
-			header: headers.name,
-			condition: F.condition,
-			status: F.status,
-			steamKgH: F.steamLoss,
-			heatKw: F.heatLoss,
-			fuelGjYear: F.fuelEnergy,
-			costMinor: F.cost,
-			co2KgYear: F.co2,
-			waterM3Year: F.water,
-			repairCostMinor: F.repairCost,
-			paybackYears: F.paybackYears,
-			measureId: F.measureId,
-			publishedVersion: sql<number | null>`NULL`
-		})
+		.select({ ...liveItemColumns, publishedVersion: sql<number | null>`NULL` })
 		.from(F)
 		.leftJoin(assets, eq(assets.id, F.assetId))
 		.leftJoin(areas, eq(areas.id, F.areaId))
@@ -101,10 +78,7 @@ function revisionPage(
 	measureId: string | null
 ) {
 	return db
-		.select({
-			...snapshotItemColumns,
-			publishedVersion: S.findingVersion
-		})
+		.select({ ...snapshotItemColumns, publishedVersion: S.findingVersion })
 		.from(S)
 		.where(
 			and(

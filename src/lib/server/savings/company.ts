@@ -25,9 +25,9 @@ import {
 	ranking,
 	sampledRunningSums,
 	savingsItem,
-	snapshotItemColumns,
 	type SavingsItem
 } from './ranked-list';
+import { snapshotItemColumns } from '../item-columns';
 import { into, type SavingsBreakdown, type SavingsGroup, type SavingsTotals } from './totals';
 
 /** Items on one page of the Ladder's list. */

@@ -10,6 +10,7 @@ import { MAX_SAVINGS_ITEMS, type SavingsRank } from '../../schemas/savings';
 import type { FindingKind, FindingStatus } from '../../schemas/finding-vocabulary';
 import { areas, assets, findings as F, headers, surveyRevisionFindings as S } from '../db/schema';
 import { savingSnapshotSql } from '../publish/snapshot';
+import { snapshotItemColumns } from '../item-columns';
 import type { Executor } from '../db/types';
 import { figuresCurrentSql } from '../pricing/state';
 import { conditionWords, kindWords, statusWords } from '../finding-words';
@@ -228,27 +229,6 @@ export async function rankedItems(
 		.orderBy(asc(ranked.place));
 	return rows.map((r) => placed(r, survey.currency));
 }
-
-/** A snapshot row's columns as a listed item reads them (its names are frozen in it). */
-export const snapshotItemColumns = {
-	id: S.findingId,
-	kind: S.kind,
-	tag: S.tag,
-	location: S.location,
-	area: S.areaName,
-	header: S.headerName,
-	condition: S.condition,
-	status: S.status,
-	steamKgH: S.steamLoss,
-	heatKw: S.heatLoss,
-	fuelGjYear: S.fuelEnergy,
-	costMinor: S.cost,
-	co2KgYear: S.co2,
-	waterM3Year: S.water,
-	repairCostMinor: S.repairCost,
-	paybackYears: S.paybackYears,
-	measureId: S.measureId
-};
 
 /**
  * The same ranking over a published revision's frozen snapshot (its names are frozen in it

@@ -173,7 +173,7 @@ export const findings = mysqlTable(
 		costEntryId: uuid('cost_entry_id').references(() => costEntries.id),
 		costEntryVersion: int('cost_entry_version'),
 		measureId: uuid('measure_id').references(() => measures.id),
-		/** draft | reviewed | published | approved | scheduled | repaired | declined | verified */
+		/** Lifecycle only: draft | reviewed | published. A client's decision lives in `decisions`. */
 		status: word('status').notNull().default('draft'),
 		recordedBy: uuid('recorded_by').references(() => users.id),
 		/** The capture's createdAt: when the device recorded it. */
