@@ -98,6 +98,24 @@ test('a client approves and books repairs and asks; the consultant answers on th
 	await client.screenshot({ path: `${shots}/approved-print.png`, fullPage: true });
 	await client.emulateMedia({ media: 'screen' });
 
+	// Its job (a measure) opens from it, with its findings and its own decision to take.
+	const [job] = await rows<{ id: string; name: string }>(
+		db,
+		`SELECT m.id, m.name FROM findings f JOIN measures m ON m.id = f.measure_id WHERE f.id = ?`,
+		[first]
+	);
+	// The seed puts the biggest saving of the maltings into a job.
+	expect(job, 'the first finding is part of a job').toBeDefined();
+	await client.getByRole('link', { name: job.name }).click();
+	await expect(client).toHaveURL(new RegExp(`/ladder/measures/${job.id}$`));
+	await expect(client.getByRole('heading', { level: 1 })).toHaveText(job.name);
+	await expect(client.getByTestId('item-figures')).toContainText('What the job costs');
+	await expect(
+		client.getByTestId('measure-findings').locator(`a[href="/ladder/findings/${first}"]`)
+	).toBeVisible();
+	await expect(client.getByTestId('current-decision')).toContainText('No decision yet');
+	await client.screenshot({ path: `${shots}/measure-phone.png`, fullPage: true });
+
 	// The second: a booking for yesterday is refused beside the date, and nothing is written.
 	const second = await openRow(client, 1);
 	expect(second).not.toBe(first);

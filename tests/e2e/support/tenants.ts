@@ -254,8 +254,10 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 }
 
 /**
- * A survey of the demo site published as revision 1, as publishing leaves it: the survey row,
- * one leak in one measure, and their frozen snapshot (figures invented test data).
+ * A survey of the demo site published as revision 1 (the survey row, one leak in one measure,
+ * their frozen snapshot; figures invented test data) whose live finding and measure were
+ * deleted since: the client still sees them in revision 1, and no live count of the demo site
+ * (nor of its surveys' findings) includes them.
  */
 async function publishedForDecisions(
 	db: Db,
@@ -274,15 +276,15 @@ async function publishedForDecisions(
 		[ids.decisionSurvey, firmId, siteId, names.decisionSurvey]
 	);
 	await db.query(
-		`INSERT INTO measures (id, survey_id, name) VALUES (?, ?, ?)
-		 ON DUPLICATE KEY UPDATE deleted_at = NULL`,
+		`INSERT INTO measures (id, survey_id, name, deleted_at) VALUES (?, ?, ?, NOW(3))
+		 ON DUPLICATE KEY UPDATE deleted_at = NOW(3)`,
 		[ids.decisionMeasure, ids.decisionSurvey, names.decisionMeasure]
 	);
 	await db.query(
 		`INSERT INTO findings (id, survey_id, kind, location, notes, inputs, photo_ids, status,
-		   measure_id, cost_minor, repair_cost_minor, payback_years)
-		 VALUES (?, ?, 'leak', ?, '', '{}', '[]', 'reviewed', ?, 120000, 30000, 0.25)
-		 ON DUPLICATE KEY UPDATE deleted_at = NULL`,
+		   measure_id, cost_minor, repair_cost_minor, payback_years, deleted_at)
+		 VALUES (?, ?, 'leak', ?, '', '{}', '[]', 'reviewed', ?, 120000, 30000, 0.25, NOW(3))
+		 ON DUPLICATE KEY UPDATE deleted_at = NOW(3)`,
 		[ids.decisionFinding, ids.decisionSurvey, names.decisionFinding, ids.decisionMeasure]
 	);
 	const totals = {

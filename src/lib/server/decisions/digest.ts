@@ -201,15 +201,17 @@ export async function sendDecisionDigests(
 	const config = currentMailConfig();
 	const none = { events: 0, sent: 0, failed: 0 };
 	if (config.mode === 'off') return { off: true, ...none };
-	let origin: string;
+	let origin = options.origin ?? '';
 	try {
-		origin = options.origin ?? linkOrigin(config, '');
-	} catch (e) {
-		console.error(`steamwisp: no decision digest sent: ${(e as Error).message}`);
-		return { off: false, ...none };
+		origin ||= linkOrigin(config, '');
+	} catch {
+		// An SMTP server needs the public URL; said below, once there is something to send.
 	}
 	if (origin === '') {
-		console.error('steamwisp: no decision digest sent: set STEAMWISP_PUBLIC_URL (or ORIGIN)');
+		const [waiting] = await db.select({ id: O.id }).from(O).where(isNull(O.sentAt)).limit(1);
+		if (waiting) {
+			console.error('steamwisp: no decision digest sent: set STEAMWISP_PUBLIC_URL (or ORIGIN)');
+		}
 		return { off: false, ...none };
 	}
 	const claim = randomUUID();

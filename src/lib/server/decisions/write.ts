@@ -60,7 +60,7 @@ function clientRefusal(actor: DecisionActor, f: ItemFacts | null, ref: ItemRef) 
 		return refuse({
 			ok: false,
 			status: 409,
-			message: `This ${what(ref)} is not in the report published to you, so it takes no decision or comment yet: nothing was saved.`
+			message: `This ${what(ref)} is not in the report published to you, so it takes no decision or comment yet.`
 		});
 	}
 	return refuse({ ok: false, status: 404, message: 'Not found.' });
