@@ -89,6 +89,12 @@ test('a client reads their ranked repairs, reorders by payback and filters by ki
 	);
 	expect(overflow).toBeLessThanOrEqual(0);
 
+	// Each repair opens to its own page (photos, figures, the decision on it).
+	await page.setViewportSize({ width: 1280, height: 800 });
+	await page.goto('/ladder');
+	await page.getByTestId('ladder-list').locator('li a').first().click();
+	await expect(page).toHaveURL(new RegExp(`/ladder/findings/${frozen[0].id}$`));
+
 	// A bad filter value is refused in words.
 	const bad = await page.goto('/ladder?kind=boiler');
 	expect(bad?.status()).toBe(400);
