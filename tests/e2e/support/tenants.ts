@@ -253,6 +253,9 @@ async function prepare(db: Db, index: 0 | 1): Promise<Tenant> {
 	};
 }
 
+/** When the decisions' survey was published (before the demo's spring survey, 4 May 2026). */
+const DECISION_SURVEY_PUBLISHED = '2026-01-15 09:00:00.000';
+
 /**
  * A survey of the demo site published as revision 1 (the survey row, one leak in one measure,
  * their frozen snapshot; figures invented test data) whose live finding and measure were
@@ -269,10 +272,13 @@ async function publishedForDecisions(
 	>,
 	names: Record<'decisionSurvey' | 'decisionFinding' | 'decisionMeasure', string>
 ) {
+	// Published before the seeded spring survey, so that survey stays the demo site's most
+	// recent publication: the one the Ladder's list shows (docs/ladder.md).
 	await db.query(
 		`INSERT INTO surveys (id, firm_id, site_id, name, status, published_at)
-		 VALUES (?, ?, ?, ?, 'published', NOW(3))
-		 ON DUPLICATE KEY UPDATE name = VALUES(name), status = 'published', published_at = NOW(3)`,
+		 VALUES (?, ?, ?, ?, 'published', '${DECISION_SURVEY_PUBLISHED}')
+		 ON DUPLICATE KEY UPDATE name = VALUES(name), status = 'published',
+		   published_at = '${DECISION_SURVEY_PUBLISHED}'`,
 		[ids.decisionSurvey, firmId, siteId, names.decisionSurvey]
 	);
 	await db.query(
@@ -306,7 +312,7 @@ async function publishedForDecisions(
 	};
 	await db.query(
 		`INSERT INTO survey_revisions (id, survey_id, number, published_at, totals, finding_count)
-		 VALUES (?, ?, 1, NOW(3), ?, 1)
+		 VALUES (?, ?, 1, '${DECISION_SURVEY_PUBLISHED}', ?, 1)
 		 ON DUPLICATE KEY UPDATE totals = VALUES(totals)`,
 		[ids.decisionRevision, ids.decisionSurvey, JSON.stringify(totals)]
 	);
