@@ -28,7 +28,13 @@ import {
 	type SavingsItem
 } from './ranked-list';
 import { snapshotItemColumns } from '../item-columns';
-import { into, type SavingsBreakdown, type SavingsGroup, type SavingsTotals } from './totals';
+import {
+	addGroup,
+	into,
+	type SavingsBreakdown,
+	type SavingsGroup,
+	type SavingsTotals
+} from './totals';
 
 /** Items on one page of the Ladder's list. */
 export const LADDER_PAGE_ITEMS = 25;
@@ -202,15 +208,7 @@ async function aggregate(db: Executor, revisionIds: string[], f: CompanyFilters,
 	const byKind = new Map<string | null, SavingsGroup>();
 	const byArea = new Map<string | null, SavingsGroup>();
 	for (const g of groups) {
-		totals.count += num(g.count);
-		totals.steamKgH += num(g.steam);
-		totals.heatKw += num(g.heat);
-		totals.fuelGjYear += num(g.fuel);
-		totals.costMinor += num(g.cost);
-		totals.co2KgYear += num(g.co2);
-		totals.waterM3Year += num(g.water);
-		totals.repairCostMinor += num(g.repair);
-		totals.withoutRepairCost += num(g.withoutRepair);
+		addGroup(totals, g);
 		into(byKind, g.kind, kindWords(g.kind), g);
 		into(byArea, g.areaId, g.area ?? 'No area', g);
 	}

@@ -79,6 +79,39 @@ const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
 
 type GroupSums = Record<'count' | 'cost' | 'repair' | 'co2', string | number | null | undefined>;
 
+/** One aggregate row's sums, as the totals' GROUP BY names them. */
+export type GroupRow = Record<
+	'count' | 'steam' | 'heat' | 'fuel' | 'cost' | 'co2' | 'water' | 'repair' | 'withoutRepair',
+	string | number | null | undefined
+>;
+
+/** Adds one aggregate row's sums into the totals of a list (live findings or snapshot rows). */
+export function addGroup(
+	totals: Pick<
+		SavingsTotals,
+		| 'count'
+		| 'steamKgH'
+		| 'heatKw'
+		| 'fuelGjYear'
+		| 'costMinor'
+		| 'co2KgYear'
+		| 'waterM3Year'
+		| 'repairCostMinor'
+		| 'withoutRepairCost'
+	>,
+	g: GroupRow
+): void {
+	totals.count += num(g.count);
+	totals.steamKgH += num(g.steam);
+	totals.heatKw += num(g.heat);
+	totals.fuelGjYear += num(g.fuel);
+	totals.costMinor += num(g.cost);
+	totals.co2KgYear += num(g.co2);
+	totals.waterM3Year += num(g.water);
+	totals.repairCostMinor += num(g.repair);
+	totals.withoutRepairCost += num(g.withoutRepair);
+}
+
 /** Adds one aggregate row's sums into its group of a breakdown (made on first use). */
 export function into(
 	map: Map<string | null, SavingsGroup>,
@@ -196,15 +229,7 @@ export async function savingsTotals(
 		totals.outOfDate += num(g.outOfDate);
 		totals.withoutFigures += num(g.withoutFigures);
 		if (num(g.count) === 0) continue;
-		totals.count += num(g.count);
-		totals.steamKgH += num(g.steam);
-		totals.heatKw += num(g.heat);
-		totals.fuelGjYear += num(g.fuel);
-		totals.costMinor += num(g.cost);
-		totals.co2KgYear += num(g.co2);
-		totals.waterM3Year += num(g.water);
-		totals.repairCostMinor += num(g.repair);
-		totals.withoutRepairCost += num(g.withoutRepair);
+		addGroup(totals, g);
 		into(byKind as Map<string | null, SavingsGroup>, g.kind, kindWords(g.kind), g);
 		into(byArea, g.areaId, g.area ?? 'No area', g);
 	}
