@@ -1,4 +1,7 @@
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 /** Pieces the benchmarks share. The built app as they start it: waits until it answers its health route. */
 export async function waitForApp(origin: string): Promise<void> {
@@ -54,3 +57,17 @@ export async function benchSignIn(
 /** The p-th percentile of sorted figures (nearest rank). */
 export const percentile = (sorted: number[], p: number) =>
 	sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+
+/** The built app (`node server`) on loopback at `port`, with a photo store of its own. */
+export function startBenchApp(name: string, port: number): ChildProcess {
+	return spawn('node', ['server'], {
+		env: {
+			...process.env,
+			HOST: '127.0.0.1',
+			PORT: String(port),
+			ORIGIN: `http://127.0.0.1:${port}`,
+			STEAMWISP_PHOTO_DIR: mkdtempSync(join(tmpdir(), `steamwisp-bench-${name}-photos-`))
+		},
+		stdio: ['ignore', 'ignore', 'inherit']
+	});
+}

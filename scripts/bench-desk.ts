@@ -15,10 +15,7 @@
  * 4. recomputing the same 100,000 from their inputs (recomputeSite).
  * Figures are printed; nothing is asserted.
  */
-import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { existsSync } from 'node:fs';
 import autocannon from 'autocannon';
 import { drizzle } from 'drizzle-orm/mysql2';
 import mysql from 'mysql2/promise';
@@ -31,7 +28,14 @@ import { touchFirm } from '../src/lib/server/sync/counter';
 import { creameryAreas } from '../src/lib/server/seed/areas';
 import { demoFirms, demoPassword, demoSites, demoUsers } from '../src/lib/server/seed/demo';
 import { creameryCostBasis } from '../src/lib/server/seed/findings';
-import { freshBenchDatabase, run, waitForApp, benchSignIn, percentile } from './bench-app';
+import {
+	benchSignIn,
+	freshBenchDatabase,
+	percentile,
+	run,
+	startBenchApp,
+	waitForApp
+} from './bench-app';
 import { insertBenchFindings, insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
@@ -165,16 +169,7 @@ async function coldView(cookie: string, path: string) {
 const ms = (v: number) => `${v.toFixed(1).padStart(6)} ms`;
 const seconds = (v: number) => `${(v / 1000).toFixed(2)} s`;
 
-const app = spawn('node', ['server'], {
-	env: {
-		...process.env,
-		HOST: '127.0.0.1',
-		PORT: String(PORT),
-		ORIGIN,
-		STEAMWISP_PHOTO_DIR: mkdtempSync(join(tmpdir(), 'steamwisp-bench-desk-photos-'))
-	},
-	stdio: ['ignore', 'ignore', 'inherit']
-});
+const app = startBenchApp('desk', PORT);
 
 try {
 	const tableSetup = await tableFixtures();

@@ -10,10 +10,7 @@
  *    send them, added up.
  * Figures are printed; nothing is asserted.
  */
-import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { existsSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
 import autocannon from 'autocannon';
 import { eq } from 'drizzle-orm';
@@ -24,7 +21,14 @@ import { surveyPricing } from '../src/lib/server/desk/findings-query';
 import { freezeSurveyBasis } from '../src/lib/server/pricing/cost-basis';
 import { writeRevision } from '../src/lib/server/publish/revision-write';
 import { demoFirms, demoPassword, demoSites, demoUsers } from '../src/lib/server/seed/demo';
-import { freshBenchDatabase, run, waitForApp, benchSignIn, percentile } from './bench-app';
+import {
+	benchSignIn,
+	freshBenchDatabase,
+	percentile,
+	run,
+	startBenchApp,
+	waitForApp
+} from './bench-app';
 import { insertBenchSite } from './bench-desk-rows';
 import { databaseUrl } from './env';
 
@@ -134,16 +138,7 @@ async function javascriptSent(cookie: string, path: string) {
 	return { files: found.size, raw, gzipped };
 }
 
-const app = spawn('node', ['server'], {
-	env: {
-		...process.env,
-		HOST: '127.0.0.1',
-		PORT: String(PORT),
-		ORIGIN,
-		STEAMWISP_PHOTO_DIR: mkdtempSync(join(tmpdir(), 'steamwisp-bench-ladder-photos-'))
-	},
-	stdio: ['ignore', 'ignore', 'inherit']
-});
+const app = startBenchApp('ladder', PORT);
 
 try {
 	const setup = await fixtures();

@@ -11,7 +11,6 @@ import type { Executor } from '../db/types';
 import { surveyPricing, type SurveyPricing } from '../desk/findings-query';
 import { revisionMeasures, surveyMeasures, type MeasureRow } from '../measures/sums';
 import {
-	frozenTotals,
 	wholeEconomics,
 	type WholeEconomics,
 	revisionBreakdown,
@@ -115,7 +114,8 @@ export async function readFigures(
 			revisionBreakdown(db, revision.id),
 			revisionMeasures(db, revision)
 		]);
-		const frozen = frozenTotals(row.totals);
+		// Revisions from before measures' own costs were counted got them in migration 0011.
+		const frozen = row.totals;
 		const economics = await wholeEconomics(db, revision.costBasisId, frozen);
 		return {
 			choice,

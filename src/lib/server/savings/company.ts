@@ -8,6 +8,7 @@
  * reads (a new publication names another revision).
  */
 import { and, asc, eq, inArray, isNotNull, sql, type SQL } from 'drizzle-orm';
+import { simplePaybackYears } from '../../economics/payback';
 import type { FindingKind } from '../../schemas/finding-vocabulary';
 import type { SavingsRank } from '../../schemas/savings';
 import {
@@ -32,6 +33,7 @@ import {
 	addGroup,
 	into,
 	type SavingsBreakdown,
+	type ListSums,
 	type SavingsGroup,
 	type SavingsTotals
 } from './totals';
@@ -68,20 +70,7 @@ export interface LadderItem extends SavingsItem {
 }
 
 /** The savings list's totals, of the rows the filters keep. */
-export type CompanyTotals = Pick<
-	SavingsTotals,
-	| 'count'
-	| 'steamKgH'
-	| 'heatKw'
-	| 'fuelGjYear'
-	| 'costMinor'
-	| 'co2KgYear'
-	| 'waterM3Year'
-	| 'repairCostMinor'
-	| 'withoutRepairCost'
-	| 'paybackYears'
-	| 'currency'
->;
+export type CompanyTotals = ListSums & Pick<SavingsTotals, 'paybackYears' | 'currency'>;
 
 export interface CompanySavings {
 	company: { id: string; name: string };
@@ -213,8 +202,10 @@ async function aggregate(db: Executor, revisionIds: string[], f: CompanyFilters,
 		into(byArea, g.areaId, g.area ?? 'No area', g);
 	}
 	const priced = totals.withoutRepairCost < totals.count;
-	totals.paybackYears =
-		priced && totals.costMinor > 0 ? totals.repairCostMinor / totals.costMinor : null;
+	totals.paybackYears = simplePaybackYears(
+		priced ? totals.repairCostMinor : null,
+		totals.costMinor
+	);
 	const bySaving = (a: SavingsGroup, b: SavingsGroup) =>
 		b.costMinor - a.costMinor || a.label.localeCompare(b.label);
 	return {

@@ -12,8 +12,8 @@ import {
 } from '../../schemas/savings';
 import type { Executor } from '../db/types';
 import type { MeasureRow } from '../measures/sums';
-import { choiceWords, type FigureChoice, type Reader } from '../publish/choose';
-import { chosenFigures, type ChosenFigures } from '../publish/figures';
+import { choiceWords, type FigureChoice } from '../publish/choose';
+import type { ChosenFigures } from '../publish/figures';
 import {
 	liveSource,
 	rankedItems,
@@ -104,20 +104,4 @@ export async function rankedSavings(
 		truncated: totals.count > items.length,
 		outOfDate: revision ? 0 : totals.outOfDate
 	};
-}
-
-export type SavingsOutcome = { ok: true; list: RankedSavings } | { ok: false; message: string };
-
-/** The list for a reader (the caller checked read access); null when the survey is gone. */
-export async function readerSavings(
-	db: Executor,
-	surveyId: string,
-	reader: Reader,
-	rank: SavingsRank,
-	asked?: number,
-	limit?: number
-): Promise<SavingsOutcome | null> {
-	const chosen = await chosenFigures(db, surveyId, reader, asked);
-	if (!chosen?.ok) return chosen;
-	return { ok: true, list: await rankedSavings(db, chosen.figures, rank, limit) };
 }

@@ -85,22 +85,22 @@ export type GroupRow = Record<
 	string | number | null | undefined
 >;
 
+/** The sums every list's totals hold, whatever else it adds (measures' costs, left-out counts). */
+export type ListSums = Pick<
+	SavingsTotals,
+	| 'count'
+	| 'steamKgH'
+	| 'heatKw'
+	| 'fuelGjYear'
+	| 'costMinor'
+	| 'co2KgYear'
+	| 'waterM3Year'
+	| 'repairCostMinor'
+	| 'withoutRepairCost'
+>;
+
 /** Adds one aggregate row's sums into the totals of a list (live findings or snapshot rows). */
-export function addGroup(
-	totals: Pick<
-		SavingsTotals,
-		| 'count'
-		| 'steamKgH'
-		| 'heatKw'
-		| 'fuelGjYear'
-		| 'costMinor'
-		| 'co2KgYear'
-		| 'waterM3Year'
-		| 'repairCostMinor'
-		| 'withoutRepairCost'
-	>,
-	g: GroupRow
-): void {
+export function addGroup(totals: ListSums, g: GroupRow): void {
 	totals.count += num(g.count);
 	totals.steamKgH += num(g.steam);
 	totals.heatKw += num(g.heat);
@@ -166,14 +166,6 @@ export function withInvestment<T extends SavingsTotals>(totals: T, extraCostMino
 		investmentMinor,
 		paybackYears: simplePaybackYears(priced ? investmentMinor : null, totals.costMinor)
 	};
-}
-
-/**
- * A revision's frozen totals as this code reads them: a revision published before measures'
- * own costs were counted has none (its payback was its findings' repairs ÷ its saving).
- */
-export function frozenTotals(t: SavingsTotals): SavingsTotals {
-	return t.extraCostMinor === undefined ? withInvestment(t, 0) : t;
 }
 
 export async function savingsTotals(
