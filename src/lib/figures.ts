@@ -67,7 +67,8 @@ export function columnTitle(column: FigureColumn, system: UnitSystemId, currency
 	return `${TITLE[column]} (${columnUnit(column, system, currency)})`;
 }
 
-const money = (minor: number | null, currency: string) =>
+/** Money as every figure cell shows it: three significant figures, the currency's sign; — for none. */
+export const money = (minor: number | null, currency: string) =>
 	minor === null ? '—' : formatMoney(fromMinorUnits(minor, currency), currency);
 
 function quantity(column: FigureColumn, stored: number | null, system: UnitSystemId): string {

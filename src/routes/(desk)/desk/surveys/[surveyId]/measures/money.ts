@@ -1,12 +1,7 @@
 /** Money, payback and rates as the measures pages show them. */
-import { formatMoney } from '$lib/components/walk/form/display';
-import { fromMinorUnits } from '$lib/steam';
 import { formatSignificant } from '$lib/units';
 
-export const money = (minor: number | null, currency: string) =>
-	minor === null ? '—' : formatMoney(fromMinorUnits(minor, currency), currency);
-
-export { paybackWords as years } from '$lib/figures';
+export { money, paybackWords as years } from '$lib/figures';
 
 export const percent = (rate: number | null) =>
 	rate === null ? 'no single rate' : `${formatSignificant(rate * 100)} %`;
